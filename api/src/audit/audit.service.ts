@@ -1,0 +1,29 @@
+import type { Request } from 'express';
+import type { EntityManager } from 'typeorm';
+import { AuditEntry } from './audit-entry.entity';
+import type { Principal } from '../auth/principal';
+
+export interface AuditEvent {
+  action: string;
+  actor?: Pick<Principal, 'userId' | 'email' | 'apiKeyId'> | null;
+  /** For events before anyone is signed in (a failed sign-in): the address that was tried. */
+  actorLabel?: string;
+  entityType?: string;
+  entityId?: string;
+  details?: Record<string, unknown>;
+}
+
+/** Appends one line to the audit trail, inside the caller's transaction when one is given. */
+export async function recordAudit(manager: EntityManager, event: AuditEvent, req?: Request): Promise<void> {
+  await manager.insert(AuditEntry, {
+    action: event.action,
+    actorUserId: event.actor?.userId ?? null,
+    actorApiKeyId: event.actor?.apiKeyId ?? null,
+    actorLabel: event.actor?.email ?? event.actorLabel ?? null,
+    entityType: event.entityType ?? null,
+    entityId: event.entityId ?? null,
+    details: (event.details ?? {}) as never,
+    ipAddress: req?.ip ?? null,
+    userAgent: req?.get('user-agent')?.slice(0, 500) ?? null,
+  });
+}

@@ -1,0 +1,27 @@
+import 'reflect-metadata';
+import path from 'node:path';
+import { DataSource, DataSourceOptions } from 'typeorm';
+
+/** dist/server/api/src/db → dist/server */
+const compiledRoot = path.resolve(__dirname, '../../..');
+
+export function dataSourceOptions(databaseUrl: string, replicaUrls: string[] = []): DataSourceOptions {
+  const common = {
+    type: 'postgres' as const,
+    entities: [path.join(compiledRoot, 'api/src/**/*.entity.js')],
+    migrations: [path.join(compiledRoot, 'migrations/*.js')],
+    migrationsTableName: 'schema_migrations',
+    synchronize: false,
+    logging: ['error' as const],
+    extra: { max: 20, connectionTimeoutMillis: 5000 },
+  };
+  if (replicaUrls.length === 0) return { ...common, url: databaseUrl };
+  return {
+    ...common,
+    replication: { master: { url: databaseUrl }, slaves: replicaUrls.map((url) => ({ url })) },
+  };
+}
+
+export function createDataSource(databaseUrl: string, replicaUrls: string[] = []): DataSource {
+  return new DataSource(dataSourceOptions(databaseUrl, replicaUrls));
+}

@@ -1,0 +1,72 @@
+/**
+ * Brent's method (Brent 1973, "Algorithms for Minimization without Derivatives", ch. 4):
+ * a root of f in [a, b] where f(a) and f(b) differ in sign; bisection guarantees
+ * convergence, inverse quadratic interpolation makes it fast.
+ * @param tolerance absolute tolerance on x
+ * @returns x with |interval| ≤ tolerance, or null when f(a), f(b) do not bracket a root
+ */
+export function brentRoot(
+  f: (x: number) => number,
+  lower: number,
+  upper: number,
+  tolerance = 1e-9,
+  maxIterations = 200,
+): number | null {
+  let a = lower;
+  let b = upper;
+  let fa = f(a);
+  let fb = f(b);
+  if (fa === 0) return a;
+  if (fb === 0) return b;
+  if (fa * fb > 0) return null;
+  let c = a;
+  let fc = fa;
+  let d = b - a;
+  let e = d;
+  for (let i = 0; i < maxIterations; i++) {
+    if (fb * fc > 0) {
+      c = a;
+      fc = fa;
+      d = b - a;
+      e = d;
+    }
+    if (Math.abs(fc) < Math.abs(fb)) {
+      a = b; b = c; c = a;
+      fa = fb; fb = fc; fc = fa;
+    }
+    const tol = 2 * Number.EPSILON * Math.abs(b) + 0.5 * tolerance;
+    const m = 0.5 * (c - b);
+    if (Math.abs(m) <= tol || fb === 0) return b;
+    if (Math.abs(e) >= tol && Math.abs(fa) > Math.abs(fb)) {
+      const s = fb / fa;
+      let p: number;
+      let q: number;
+      if (a === c) {
+        p = 2 * m * s;
+        q = 1 - s;
+      } else {
+        const qa = fa / fc;
+        const r = fb / fc;
+        p = s * (2 * m * qa * (qa - r) - (b - a) * (r - 1));
+        q = (qa - 1) * (r - 1) * (s - 1);
+      }
+      if (p > 0) q = -q;
+      else p = -p;
+      if (2 * p < Math.min(3 * m * q - Math.abs(tol * q), Math.abs(e * q))) {
+        e = d;
+        d = p / q;
+      } else {
+        d = m;
+        e = m;
+      }
+    } else {
+      d = m;
+      e = m;
+    }
+    a = b;
+    fa = fb;
+    b += Math.abs(d) > tol ? d : m > 0 ? tol : -tol;
+    fb = f(b);
+  }
+  return b;
+}
