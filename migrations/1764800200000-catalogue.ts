@@ -23,7 +23,7 @@ export class Catalogue1764800200000 implements MigrationInterface {
         hill_formula text NOT NULL,
         charge integer NOT NULL DEFAULT 0,
         composition jsonb NOT NULL,
-        element_symbols text[] GENERATED ALWAYS AS (kx_composition_elements(composition)) STORED,
+        element_symbols text[] NOT NULL GENERATED ALWAYS AS (kx_composition_elements(composition)) STORED,
         molar_mass double precision NOT NULL,
         name text NOT NULL,
         synonyms text[] NOT NULL DEFAULT '{}',

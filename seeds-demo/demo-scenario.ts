@@ -92,7 +92,7 @@ export interface DemoItem {
   /** species / phase keys the item refers to (existing records) */
   species?: string;
   phase?: string;
-  /** for revise_value: the demo value it revises */
+  /** for revise_value: the demo value it revises (the loader adds its id to the payload as `valueId`) */
   targetValue?: string;
   /** the value row the item created (approved and released proposals) */
   resultValue?: DemoValue;
@@ -193,14 +193,14 @@ export const DEMO_PROPOSALS: DemoProposal[] = [
       { key: 'add-phase', kind: 'add_phase', payload: { species: 'propan-1-ol', phase: 'l' }, resultSpecies: 'C3H7OH', resultPhase: 'l' },
       {
         key: 'dfH', kind: 'add_value', source: 'qpc-tc03-2025',
-        payload: { quantity: 'dfH', value: '-302.9', uncertainty: '0.5', uncertaintyKind: 'expanded', coverageFactor: 2, unit: 'kJ/mol', temperatureK: 298.15, pressurePa: 100000, method: 'measured' },
+        payload: { species: 'propan-1-ol', phase: 'l', quantity: 'dfH', value: '-302.9', uncertainty: '0.5', uncertaintyKind: 'expanded', coverageFactor: 2, unit: 'kJ/mol', temperatureK: 298.15, pressurePa: 100000, method: 'measured' },
         resultValue: { key: 'demo:propanol(l):dfH', species: 'C3H7OH', phase: 'l', quantity: 'dfH', value: '-302.9', uncertainty: '0.5', unit: 'kJ/mol', source: 'qpc-tc03-2025' },
         checks: [pass('plausible-magnitude', 'ΔfH° is in the usual range for a C3 alcohol liquid'), warn('compare-other-sources', 'No other source holds ΔfH° of propan-1-ol (l) yet')],
         evidence: [{ key: 'tc03-propanol', fileName: 'tc03-propan-1-ol-combustion.csv', mediaType: 'text/csv', description: 'Combustion runs C-101 to C-105 (invented demo data)', content: TC03_PROPANOL, source: 'qpc-tc03-2025' }],
       },
       {
         key: 'Cp', kind: 'add_value', source: 'qpc-dsc07-2026',
-        payload: { quantity: 'Cp', value: '144.2', uncertainty: '1.2', uncertaintyKind: 'expanded', coverageFactor: 2, unit: 'J/(mol·K)', temperatureK: 298.15, pressurePa: 100000, method: 'measured' },
+        payload: { species: 'propan-1-ol', phase: 'l', quantity: 'Cp', value: '144.2', uncertainty: '1.2', uncertaintyKind: 'expanded', coverageFactor: 2, unit: 'J/(mol·K)', temperatureK: 298.15, pressurePa: 100000, method: 'measured' },
         resultValue: { key: 'demo:propanol(l):Cp', species: 'C3H7OH', phase: 'l', quantity: 'Cp', value: '144.2', uncertainty: '1.2', unit: 'J/(mol·K)', source: 'qpc-dsc07-2026' },
         checks: [pass('heat-capacity-positive', 'Cp° > 0')],
       },
@@ -224,14 +224,14 @@ export const DEMO_PROPOSALS: DemoProposal[] = [
       { key: 'add-phase', kind: 'add_phase', payload: { species: 'ethyl acetate', phase: 'l' }, resultSpecies: 'EtOAc', resultPhase: 'l' },
       {
         key: 'dfH', kind: 'add_value', source: 'qpc-tc03-2025',
-        payload: { quantity: 'dfH', value: '-479.6', uncertainty: '0.9', uncertaintyKind: 'expanded', coverageFactor: 2, unit: 'kJ/mol', temperatureK: 298.15, pressurePa: 100000, method: 'measured' },
+        payload: { species: 'ethyl acetate', phase: 'l', quantity: 'dfH', value: '-479.6', uncertainty: '0.9', uncertaintyKind: 'expanded', coverageFactor: 2, unit: 'kJ/mol', temperatureK: 298.15, pressurePa: 100000, method: 'measured' },
         resultValue: { key: 'demo:ethyl-acetate(l):dfH', species: 'EtOAc', phase: 'l', quantity: 'dfH', value: '-479.6', uncertainty: '0.9', unit: 'kJ/mol', source: 'qpc-tc03-2025' },
         checks: [pass('plausible-magnitude', 'ΔfH° is in the usual range for an ester liquid')],
         evidence: [{ key: 'tc03-ethyl-acetate', fileName: 'tc03-ethyl-acetate-combustion.csv', mediaType: 'text/csv', description: 'Combustion runs C-111 to C-114 (invented demo data)', content: TC03_ETHYL_ACETATE }],
       },
       {
         key: 'Cp', kind: 'add_value', source: 'qpc-dsc07-2026',
-        payload: { quantity: 'Cp', value: '169.8', uncertainty: '1.5', uncertaintyKind: 'expanded', coverageFactor: 2, unit: 'J/(mol·K)', temperatureK: 298.15, pressurePa: 100000, method: 'measured' },
+        payload: { species: 'ethyl acetate', phase: 'l', quantity: 'Cp', value: '169.8', uncertainty: '1.5', uncertaintyKind: 'expanded', coverageFactor: 2, unit: 'J/(mol·K)', temperatureK: 298.15, pressurePa: 100000, method: 'measured' },
         resultValue: { key: 'demo:ethyl-acetate(l):Cp', species: 'EtOAc', phase: 'l', quantity: 'Cp', value: '169.8', uncertainty: '1.5', unit: 'J/(mol·K)', source: 'qpc-dsc07-2026' },
         checks: [pass('heat-capacity-positive', 'Cp° > 0')],
       },
@@ -289,7 +289,7 @@ export const DEMO_PROPOSALS: DemoProposal[] = [
     items: [
       {
         key: 'fit', kind: 'add_fit', source: 'qpc-dsc07-2026', species: 'C3H7OH', phase: 'l',
-        payload: { form: 'tabulated', tMin: 280, tMax: 340, ranges: [{ tMin: 280, tMax: 340, points: [[280, 136.9], [290, 140.6], [298.15, 144.2], [310, 148.1], [320, 151.9], [330, 155.8], [340, 159.9]] }], method: 'measured' },
+        payload: { species: 'propan-1-ol', phase: 'l', form: 'tabulated', tMin: 280, tMax: 340, ranges: [{ tMin: 280, tMax: 340, points: [[280, 136.9], [290, 140.6], [298.15, 144.2], [310, 148.1], [320, 151.9], [330, 155.8], [340, 159.9]] }], method: 'measured' },
         checks: [pass('heat-capacity-positive', 'Cp > 0 over 280–340 K'), pass('reproduces-own-values', 'Cp(298.15 K) equals the released Cp° (144.2 J/(mol·K))')],
         evidence: [{ key: 'dsc07-propanol', fileName: 'dsc07-propan-1-ol-cp.csv', mediaType: 'text/csv', description: 'DSC points 280–340 K (invented demo data)', content: DSC07_PROPANOL, source: 'qpc-dsc07-2026' }],
       },
@@ -308,7 +308,7 @@ export const DEMO_PROPOSALS: DemoProposal[] = [
     items: [
       {
         key: 'vap', kind: 'add_value', source: 'qpc-tc03-2025', species: 'EtOAc', phase: 'l',
-        payload: { quantity: 'dtrsH', transitionKind: 'vap', value: '35.4', uncertainty: '0.3', uncertaintyKind: 'expanded', coverageFactor: 2, unit: 'kJ/mol', temperatureK: 298.15, pressurePa: 100000, method: 'measured' },
+        payload: { species: 'ethyl acetate', phase: 'l', quantity: 'dtrsH', transitionKind: 'vap', value: '35.4', uncertainty: '0.3', uncertaintyKind: 'expanded', coverageFactor: 2, unit: 'kJ/mol', temperatureK: 298.15, pressurePa: 100000, method: 'measured' },
         checks: [pass('transition-enthalpy-positive', 'ΔvapH > 0'), warn('compare-other-sources', 'No other source holds ΔvapH of ethyl acetate yet')],
       },
     ],

@@ -123,7 +123,7 @@ export async function loadDemoData(dataSource: DataSource, store?: EvidenceStore
 
     count('sources', await insertMissing(m, 'sources', [
       ...REFERENCE_SOURCES.map((s) => ({ id: sourceId(s.key), short_key: s.key, title: s.title, year: s.year, doi: null, csl: JSON.stringify(s.csl), notes: s.notes, created_by: null, created_at: '2026-01-05T09:00:00Z' })),
-      ...DEMO_SOURCES.map((s) => ({ id: sourceId(s.key), short_key: s.key, title: s.title, year: s.year, doi: null, csl: JSON.stringify(s.csl), notes: s.notes, created_by: userId('steward@kelvindex.test'), created_at: `${s.year}-12-01T09:00:00Z` })),
+      ...DEMO_SOURCES.map((s) => ({ id: sourceId(s.key), short_key: s.key, title: s.title, year: s.year, doi: null, csl: JSON.stringify(s.csl), notes: s.notes, created_by: userId('steward@kelvindex.test'), created_at: '2026-03-01T09:00:00Z' })),
     ]));
 
     const allSpecies = [...REFERENCE_SPECIES, ...DEMO_SPECIES];
@@ -351,7 +351,8 @@ async function loadProposals(m: EntityManager, userId: (email: string) => string
     const species = item.species ?? valueTarget?.species;
     const phase = item.phase ?? valueTarget?.phase;
     return {
-      id: itemId(p.key, item.key), proposal_id: proposalId(p.key), position: index + 1, kind: item.kind, payload: JSON.stringify(item.payload),
+      id: itemId(p.key, item.key), proposal_id: proposalId(p.key), position: index + 1, kind: item.kind,
+      payload: JSON.stringify(item.targetValue ? { valueId: valueId(item.targetValue), ...item.payload } : item.payload),
       source_id: item.source ? sourceId(item.source) : null,
       species_id: species ? speciesId(species) : null,
       species_phase_id: species && phase ? phaseId(species, phase) : null,

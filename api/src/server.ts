@@ -2,7 +2,7 @@ import type { Server } from 'node:http';
 import type { DataSource } from 'typeorm';
 import { createApp } from './app';
 import type { AppConfig } from './config';
-import { createDataSource } from './db/data-source';
+import { openDataSource } from './db/data-source';
 import { ObjectStore } from './storage/object-store';
 import { MailQueue } from './mail/mail-queue';
 
@@ -14,8 +14,7 @@ export interface RunningServer {
 
 /** Connects to PostgreSQL and the object store, then listens; `close()` undoes both. */
 export async function startServer(config: AppConfig): Promise<RunningServer> {
-  const dataSource = createDataSource(config.databaseUrl, config.databaseReplicaUrls);
-  await dataSource.initialize();
+  const dataSource = await openDataSource(config.databaseUrl, config.databaseReplicaUrls);
   const store = new ObjectStore(config.s3);
   const mail = new MailQueue(config);
   await mail.start();

@@ -102,6 +102,17 @@ export class PostgresCluster {
     this.startedHere = false;
   }
 
+  /** A streaming replica of this cluster (pg_basebackup), not yet started. */
+  async createReplica(dir: string, port: number): Promise<PostgresCluster> {
+    mkdirSync(dir, { recursive: true });
+    this.giveToOwner(dir);
+    chmodSync(dir, 0o700);
+    const replica = new PostgresCluster({ dir, port, throwaway: this.options.throwaway });
+    await this.asOwner('pg_basebackup', ['-h', '127.0.0.1', '-p', String(this.options.port), '-U', 'postgres', '-D', replica.dataDir, '-R', '-X', 'stream'], 'ignore');
+    await replica.ensureInstalled();
+    return replica;
+  }
+
   async destroy(): Promise<void> {
     await this.stop(false);
     rmSync(this.options.dir, { recursive: true, force: true });

@@ -17,7 +17,7 @@ interface SuiteCount {
   note?: string;
 }
 
-const ALL_SUITES = ['api', 'client', 'e2e'] as const;
+const ALL_SUITES = ['api', 'reliability', 'client', 'e2e'] as const;
 type SuiteName = (typeof ALL_SUITES)[number];
 
 /**
@@ -55,6 +55,9 @@ async function main(): Promise<void> {
 
     if (wanted.includes('api')) {
       counts.push(await jasmineSuite('api', 'api/jasmine.json', await databaseFor('kelvindex_api'), tmp));
+    }
+    if (wanted.includes('reliability')) {
+      counts.push(await jasmineSuite('reliability', 'test/reliability/jasmine.json', env, tmp));
     }
     if (wanted.includes('client')) {
       counts.push(await karmaSuite(env, tmp));

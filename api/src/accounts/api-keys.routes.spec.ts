@@ -11,7 +11,7 @@ describe('API keys', () => {
 
   it('shows the secret once, stores only its hash, and authenticates with X-API-Key or Bearer', async () => {
     const reader = await bearerFor(t.app, 'reader');
-    const created = await request(t.app).post('/api/v1/api-keys').set('Authorization', reader).send({ name: 'plant simulator' }).expect(201);
+    const created = await request(t.app).post('/api/v1/api-keys').set('Authorization', reader).send({ name: `plant simulator ${Date.now()}` }).expect(201);
     expect(created.body.scope).toBe('read');
     const secret: string = created.body.secret;
     expect(secret).toMatch(/^kx[A-Za-z0-9]{10}\./);
@@ -33,7 +33,7 @@ describe('API keys', () => {
 
   it('keeps read-only keys from writing and refuses revoked or forged keys', async () => {
     const admin = await bearerFor(t.app, 'admin');
-    const created = await request(t.app).post('/api/v1/api-keys').set('Authorization', admin).send({ name: 'read-only admin key' }).expect(201);
+    const created = await request(t.app).post('/api/v1/api-keys').set('Authorization', admin).send({ name: `read-only admin key ${Date.now()}` }).expect(201);
     const key = created.body.secret as string;
     const write = await request(t.app).post('/api/v1/users/invitations').set('X-API-Key', key).send({ email: 'x@kelvindex.test', roles: ['reader'] }).expect(403);
     expect(write.body.message).toContain('read-only');
@@ -49,7 +49,7 @@ describe('API keys', () => {
 
   it('does not let one user revoke another user\'s key', async () => {
     const steward = await bearerFor(t.app, 'steward');
-    const created = await request(t.app).post('/api/v1/api-keys').set('Authorization', steward).send({ name: 'mine' }).expect(201);
+    const created = await request(t.app).post('/api/v1/api-keys').set('Authorization', steward).send({ name: `mine ${Date.now()}` }).expect(201);
     const reader = await bearerFor(t.app, 'reader');
     await request(t.app).delete(`/api/v1/api-keys/${created.body.id}`).set('Authorization', reader).expect(404);
     await request(t.app).get('/api/v1/auth/me').set('X-API-Key', created.body.secret).expect(200);

@@ -35,7 +35,7 @@ describe('route access matrix: every declared route × anonymous, each role and 
       ['admin', ['reader', 'admin']],
     ];
     for (const [who, roles] of demo) callers.push({ label: who, roles, header: ['Authorization', await bearerFor(t.app, who)] });
-    const key = await request(t.app).post('/api/v1/api-keys').set('Authorization', await bearerFor(t.app, 'admin')).send({ name: 'route matrix' }).expect(201);
+    const key = await request(t.app).post('/api/v1/api-keys').set('Authorization', await bearerFor(t.app, 'admin')).send({ name: `route matrix ${Date.now()}` }).expect(201);
     callers.push({ label: 'read-only API key (admin)', roles: ['reader', 'admin'], header: ['X-API-Key', key.body.secret], readOnlyKey: true });
   });
 

@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import path from 'node:path';
 import { DataSource, DataSourceOptions } from 'typeorm';
+import { fallBackToPrimaryWhenReplicaIsDown } from './replica-fallback';
 
 /** dist/server/api/src/db → dist/server */
 const compiledRoot = path.resolve(__dirname, '../../..');
@@ -18,10 +19,18 @@ export function dataSourceOptions(databaseUrl: string, replicaUrls: string[] = [
   if (replicaUrls.length === 0) return { ...common, url: databaseUrl };
   return {
     ...common,
-    replication: { master: { url: databaseUrl }, slaves: replicaUrls.map((url) => ({ url })) },
+    replication: { master: { url: databaseUrl }, slaves: replicaUrls.map((url) => ({ url, connectTimeoutMS: 1000 })) },
   };
 }
 
 export function createDataSource(databaseUrl: string, replicaUrls: string[] = []): DataSource {
   return new DataSource(dataSourceOptions(databaseUrl, replicaUrls));
+}
+
+/** Connects, with reads falling back to the primary when a replica is unreachable. */
+export async function openDataSource(databaseUrl: string, replicaUrls: string[] = []): Promise<DataSource> {
+  const dataSource = createDataSource(databaseUrl, replicaUrls);
+  await dataSource.initialize();
+  fallBackToPrimaryWhenReplicaIsDown(dataSource);
+  return dataSource;
 }

@@ -79,22 +79,40 @@ export async function attempt(manager: EntityManager, statement: string | (() =>
   }
 }
 
-/**
- * Creates an empty database next to DATABASE_URL's, hands `work` a data source on it (not
- * migrated), and drops it afterwards.
- */
-export async function withScratchDatabase<T>(work: (dataSource: DataSource, url: string) => Promise<T>): Promise<T> {
+/** A fresh, empty database on DATABASE_URL's cluster, with an (unmigrated) data source on it. */
+export interface ScratchDatabase {
+  dataSource: DataSource;
+  url: string;
+  /** closes the data source and drops the database */
+  drop(): Promise<void>;
+}
+
+export async function createScratchDatabase(): Promise<ScratchDatabase> {
   const admin = await sharedDataSource();
   const name = `kx_scratch_${process.pid}_${randomBytes(3).toString('hex')}`;
   await admin.query(`CREATE DATABASE ${name}`);
   const url = new URL(databaseUrl());
   url.pathname = `/${name}`;
   const dataSource = quietDataSource(url.toString());
-  try {
-    await dataSource.initialize();
-    return await work(dataSource, url.toString());
-  } finally {
+  const drop = async () => {
     if (dataSource.isInitialized) await dataSource.destroy();
     await admin.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`);
+  };
+  try {
+    await dataSource.initialize();
+  } catch (error) {
+    await drop();
+    throw error;
+  }
+  return { dataSource, url: url.toString(), drop };
+}
+
+/** Runs `work` on a scratch database and drops it afterwards. */
+export async function withScratchDatabase<T>(work: (dataSource: DataSource, url: string) => Promise<T>): Promise<T> {
+  const scratch = await createScratchDatabase();
+  try {
+    return await work(scratch.dataSource, scratch.url);
+  } finally {
+    await scratch.drop();
   }
 }

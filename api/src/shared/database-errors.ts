@@ -1,4 +1,5 @@
 import { ConflictError, HttpError, ServiceUnavailableError, UnprocessableError } from './errors';
+import { constraintMessage } from '../db/constraint-messages';
 
 interface PgErrorLike {
   code?: string;
@@ -18,19 +19,21 @@ export function translateDatabaseError(error: unknown): HttpError | undefined {
   if (typeof error !== 'object' || error === null) return undefined;
   const pg = ((error as PgErrorLike).driverError ?? error) as PgErrorLike;
   const code = pg.code ?? '';
+  const known = constraintMessage(pg.constraint);
   const constraint = pg.constraint ? ` (${pg.constraint})` : '';
+  const details = { constraint: pg.constraint, field: known?.field, detail: pg.detail };
   if (CONNECTION_CODES.has(code) || /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect/i.test(pg.message ?? '')) {
     return new ServiceUnavailableError('The database is unreachable; try again shortly');
   }
   switch (code) {
     case '23505':
-      return new ConflictError(`A record with these values already exists${constraint}`, { detail: pg.detail });
+      return new ConflictError(known?.message ?? `A record with these values already exists${constraint}`, details);
     case '23503':
-      return new UnprocessableError(`A referenced record does not exist${constraint}`, { detail: pg.detail });
+      return new UnprocessableError(known?.message ?? `A referenced record does not exist${constraint}`, details);
     case '23514':
-      return new UnprocessableError(`A value breaks a data rule${constraint}`, { detail: pg.detail });
+      return new UnprocessableError(known?.message ?? `A value breaks a data rule${constraint}`, details);
     case '23502':
-      return new UnprocessableError(`A required value is missing${constraint}`, { detail: pg.detail });
+      return new UnprocessableError(known?.message ?? `A required value is missing${constraint}`, details);
     case '22P02':
     case '22003':
     case '22007':
@@ -40,7 +43,7 @@ export function translateDatabaseError(error: unknown): HttpError | undefined {
     case '40P01':
       return new ConflictError('Another change to the same records happened at the same time; retry');
     case 'P0001':
-      return new ConflictError(pg.message ?? 'The database refused the change');
+      return new ConflictError(known?.message ?? pg.message ?? 'The database refused the change', details);
     default:
       return undefined;
   }

@@ -2,6 +2,9 @@ import { CreateBucketCommand, GetObjectCommand, HeadBucketCommand, PutObjectComm
 import { Readable } from 'node:stream';
 import type { AppConfig } from '../config';
 
+// The platform runs Node 20 by design; the SDK's notice about future Node 22 releases is noise here.
+process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= 'true';
+
 /** Evidence files live in an S3-compatible bucket; locally that is the s3rver fake. */
 export class ObjectStore {
   private readonly client: S3Client;

@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import { balanceReaction } from './balance';
 import { parseFormula } from './formula';
 import { checkBalance, parseReaction, type ParsedReaction } from './reaction';
+import { expectProperty } from './testing/expect-property';
 
 function balance(text: string) {
   return balanceReaction(parseReaction(text));
@@ -86,7 +87,7 @@ describe('balanceReaction', () => {
     const pool = ['CH4', 'O2', 'CO2', 'H2O', 'CO', 'H2', 'N2', 'NH3', 'NO', 'NO2', 'C2H6', 'C2H5OH', 'Fe', 'Fe2O3',
       'Fe3O4', 'Al', 'Al2O3', 'KClO3', 'KCl', 'HCl', 'Cl2', 'NaOH', 'NaCl', 'H2SO4', 'SO2', 'SO3', 'H+', 'OH-', 'e-',
       'Fe+2', 'Fe+3', 'MnO4-', 'Mn+2', 'C3H8', 'C6H12O6', 'CaCO3', 'CaO', 'H2O2', 'O3'];
-    fc.assert(
+    expectProperty(
       fc.property(
         fc.uniqueArray(fc.constantFrom(...pool), { minLength: 2, maxLength: 7 }),
         fc.integer({ min: 1, max: 6 }),

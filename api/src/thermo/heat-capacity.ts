@@ -97,8 +97,12 @@ export function compileHeatCapacity(fn: HeatCapacityFunction, s298?: number): Th
 }
 
 /** Valid temperature range of a function / K (from its first to its last range). */
-export function validRange(fn: HeatCapacityFunction, s298 = 0): { tMin: number; tMax: number } {
-  const kernel = compileHeatCapacity(fn, needsEntropyAnchor(fn) ? s298 : undefined);
+export function validRange(fn: HeatCapacityFunction): { tMin: number; tMax: number } {
+  if (fn.kind === 'constant') return { tMin: fn.tMin, tMax: fn.tMax };
+  if (fn.kind === 'tabulated') {
+    return { tMin: fn.points[0]?.temperature ?? Number.NaN, tMax: fn.points[fn.points.length - 1]?.temperature ?? Number.NaN };
+  }
+  const kernel = compileHeatCapacity(fn);
   return { tMin: kernel.tMin, tMax: kernel.tMax };
 }
 

@@ -6,6 +6,7 @@ import { compileReaction, crossoverTemperature, favouredBy, reactionAt, reaction
 import type { SpeciesThermoData } from './species-data';
 import { expectWithin } from './testing/expect-within';
 import { CODATA_1989, JANAF, kJ, NBS_1982, TM4513 } from './testing/published-values';
+import { expectProperty } from './testing/expect-property';
 
 /** A participant with a constant Cp over 298.15–1000 K (only 298.15 K values are checked). */
 function species(label: string, dfH: number, uH: number, s: number, uS: number, cp = 0): SpeciesThermoData {
@@ -132,7 +133,7 @@ describe('reaction thermochemistry', () => {
     it('ΔrG° = ΔrH° − T·ΔrS° at every T (property)', () => {
       // Definition of the Gibbs energy
       const compiled = compileReaction(methaneCombustion);
-      fc.assert(
+      expectProperty(
         fc.property(fc.double({ min: 200, max: 6000, noNaN: true }), (t) => {
           const r = compiled.at(t);
           return Math.abs(r.deltaG.value - (r.deltaH.value - t * r.deltaS.value)) <= 1e-9 * Math.abs(r.deltaH.value);
@@ -143,7 +144,7 @@ describe('reaction thermochemistry', () => {
 
     it('ΔrH°(T) − ΔrH°(298.15) = ∫ΔrCp dT (Kirchhoff; trapezoid on 2000 steps, property)', () => {
       const compiled = compileReaction(ammonia);
-      fc.assert(
+      expectProperty(
         fc.property(fc.double({ min: 300, max: 5000, noNaN: true }), (t) => {
           const steps = 2000;
           const temps = Array.from({ length: steps + 1 }, (_, i) => 298.15 + ((t - 298.15) * i) / steps);

@@ -77,6 +77,10 @@ export type CrossoverResult =
     }
   | { readonly found: false; readonly temperature: null; readonly reason: string; readonly firstGuess: number | null };
 
+/**
+ * Which terms favour the reaction, from ΔrH° / (J mol⁻¹) and ΔrS° / (J mol⁻¹ K⁻¹): enthalpy
+ * when ΔrH° < 0, entropy when ΔrS° > 0 (both, or neither).
+ */
 export function favouredBy(deltaH: number, deltaS: number): FavouredBy {
   const h = deltaH < 0;
   const s = deltaS > 0;

@@ -25,10 +25,14 @@ export type FitRevision = Partial<Omit<NewFit, 'speciesPhaseId'>>;
 
 const CHAIN_AND_META = ['id', 'lineageId', 'versionNo', 'supersedesId', 'isRetired', 'retiredReason', 'createdAt', 'speciesPhase', 'source'] as const;
 
+/**
+ * What a new version takes over from the previous one: the data, not the chain, and not who
+ * entered or approved it or through which proposal item (those belong to the new version).
+ */
 function carriedOver<T extends object>(previous: T): Partial<T> {
   const copy: Partial<T> = { ...previous };
   for (const key of CHAIN_AND_META) delete (copy as Record<string, unknown>)[key];
-  return copy;
+  return { ...copy, enteredBy: null, approvedBy: null, proposalItemId: null, notes: null };
 }
 
 /** Inserts the first version of a new value lineage (lineage id = its own id). */
@@ -69,6 +73,7 @@ export async function retireValue(
     enteredBy: by.enteredBy ?? null,
     approvedBy: by.approvedBy ?? null,
     proposalItemId: by.proposalItemId ?? null,
+    notes: null,
     id: by.id ?? randomUUID(),
     lineageId: previous.lineageId,
     versionNo: previous.versionNo + 1,
