@@ -11,6 +11,19 @@ import { authRoutes } from './auth/auth.routes';
 import { apiKeysRoutes, usersRoutes } from './accounts/accounts.routes';
 import { outboxRoutes } from './mail/outbox.routes';
 import { auditRoutes } from './audit/audit.routes';
+import { proposalsRoutes } from './proposals/proposals.routes';
+import { evidenceRoutes } from './evidence/evidence.routes';
+import { releaseEditingRoutes } from './releases/release-editing.routes';
+import { sourcesRoutes } from './sources/sources.routes';
+import { importsRoutes } from './imports/imports.routes';
+import { watchlistRoutes } from './watchlists/watchlists.routes';
+import { savedReactionsRoutes } from './saved-reactions/saved-reactions.routes';
+import { preferencesRoutes } from './preferences/preferences.routes';
+import { speciesRoutes } from './species/species.routes';
+import { releasesRoutes } from './releases/releases.routes';
+import { reactionComputeRoutes } from './reactions/reaction-compute.routes';
+import { exportRoutes } from './exports/export.routes';
+import { openApiRoutes } from './openapi/openapi.routes';
 
 /** Builds the Express app: the JSON API under /api/v1 and, when built, the web client. */
 export function createApp(ctx: AppContext): Express {
@@ -47,6 +60,19 @@ export function createApp(ctx: AppContext): Express {
   api.use('/api-keys', apiKeysRoutes(ctx));
   api.use('/dev/outbox', outboxRoutes(ctx));
   api.use('/audit', auditRoutes(ctx));
+  api.use('/proposals', proposalsRoutes(ctx));
+  api.use('/evidence', evidenceRoutes(ctx));
+  api.use('/releases', releaseEditingRoutes(ctx));
+  api.use('/sources', sourcesRoutes(ctx));
+  api.use('/imports', importsRoutes(ctx));
+  api.use('/watchlist', watchlistRoutes(ctx));
+  api.use('/saved-reactions', savedReactionsRoutes(ctx));
+  api.use('/me', preferencesRoutes(ctx));
+  api.use('/species', speciesRoutes(ctx));
+  api.use('/releases', releasesRoutes(ctx));
+  api.use('/reactions', reactionComputeRoutes(ctx));
+  api.use('/export', exportRoutes(ctx));
+  api.use(openApiRoutes(ctx));
   api.use(notFoundHandler);
   app.use('/api/v1', api);
   app.use('/api', notFoundHandler);

@@ -24,6 +24,11 @@ export function requireRole(...roles: Role[]): RequestHandler {
 
 /** Published data: open to everyone when public reading is on, otherwise to readers. */
 export function requireReadAccess(publicRead: boolean): RequestHandler {
-  const readers = requireRole('reader', 'steward', 'reviewer', 'editor', 'admin');
-  return (req, res, next) => (publicRead ? next() : readers(req, res, next));
+  const roles: Role[] = ['reader', 'steward', 'reviewer', 'editor', 'admin'];
+  // Reading changes nothing, so a read-only API key passes whatever the method (the compute POSTs).
+  return (req, _res, next) => {
+    if (publicRead) return next();
+    if (!req.user) return next(new UnauthorizedError());
+    next(roles.some((r) => req.user!.roles.includes(r)) ? undefined : new ForbiddenError(`This needs the ${roles.join(' or ')} role`));
+  };
 }

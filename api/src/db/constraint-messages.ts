@@ -168,6 +168,10 @@ export const CONSTRAINT_MESSAGES: Readonly<Record<string, ConstraintMessage>> = 
   import_jobs_errors_array: { message: 'Import problems must be a list.' },
   import_jobs_finished: { message: 'A finished import has a finishing time.' },
   import_jobs_dry_run_writes_nothing: { message: 'A dry run creates no proposal.' },
+
+  // editorial workflow additions (migrations/1764800600000-workflow-additions.ts)
+  users_preferences_object: { message: 'Preferences must be an object.', field: 'preferences' },
+  sources_merged_into_other: { message: 'A source cannot be merged into itself.', field: 'intoId' },
 };
 
 /** The sentence for a constraint name from a PostgreSQL error, if it is one of ours. */

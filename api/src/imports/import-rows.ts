@@ -1,0 +1,211 @@
+import { randomUUID } from 'node:crypto';
+import { hillFormula } from '../thermo/formula-format';
+import { tryParseFormula } from '../thermo/formula';
+import { normalizeDoi } from '../sources/doi';
+import { PHASE_CODES, type PhaseCode } from '../species/phase-code';
+import { itemColumns, resolveItems, type CatalogueView, type ItemInput } from '../proposals/proposal-subjects';
+import type { Quantity } from '../values/value-vocabulary';
+import type { ImportProblem, ImportRow } from './import-files';
+
+type ParsedFormulaOf = Extract<ReturnType<typeof tryParseFormula>, { ok: true }>['formula'];
+
+/**
+ * Turns import rows into the items of one draft proposal: an add_value item per row, plus
+ * add_species and add_phase items for species (named in the row) and phases not yet in the
+ * catalogue. Every problem is reported with its line; the items are then resolved exactly as
+ * items added by hand would be, so an import can hold nothing a steward could not enter.
+ */
+
+const QUANTITY_SPELLINGS: Readonly<Record<string, Quantity>> = {
+  dfh: 'dfH', 'δfh°': 'dfH', 'δfh': 'dfH', 'δfh°(298.15 k)': 'dfH',
+  s: 'S', 's°': 'S',
+  cp: 'Cp', 'cp°': 'Cp', 'c_p': 'Cp',
+  dfg: 'dfG', 'δfg°': 'dfG', 'δfg': 'dfG',
+  dtrsh: 'dtrsH', 'δtrsh': 'dtrsH', 'δtrsh°': 'dtrsH',
+};
+
+/** Payload fields of an add_value item → the column a steward wrote them in. */
+const COLUMN_OF: Readonly<Record<string, string>> = {
+  'payload.value': 'value', 'payload.unit': 'unit', 'payload.uncertainty': 'uncertainty', 'payload.uncertaintyKind': 'uncertaintyKind',
+  'payload.coverageFactor': 'coverageFactor', 'payload.temperatureK': 'temperature', 'payload.pressurePa': 'pressure', 'payload.method': 'method',
+  'payload.levelOfTheory': 'methodDetail', 'payload.quantity': 'quantity', 'payload.transitionKind': 'transition', 'payload.phase': 'phase',
+  'payload.polymorph': 'polymorph', 'payload.species': 'name', 'payload.speciesId': 'formula', 'payload.speciesPhaseId': 'phase', 'sourceId': 'sourceKey',
+  'payload.formula': 'formula', 'payload.name': 'name', 'payload.sourceLocator': 'sourceLocator', 'payload.notes': 'notes',
+};
+
+export interface ImportSources {
+  byKey: Map<string, string>;
+  byDoi: Map<string, string>;
+}
+
+export interface PreparedImport {
+  items: ItemInput[];
+  /** the reference columns of each item (species, species phase), as resolved */
+  columns: Map<string, ReturnType<typeof itemColumns>>;
+  problems: ImportProblem[];
+  counts: { species: number; phases: number; values: number };
+}
+
+/** "100000", "1e5 Pa", "100 kPa", "1 bar", "1 atm", "101.325 kPa" → Pa; undefined when unreadable. */
+export function readPressure(text: string): number | undefined {
+  const match = /^\s*([+]?\d+(?:\.\d*)?(?:[eE][+-]?\d+)?)\s*(pa|kpa|bar|atm)?\s*$/i.exec(text);
+  if (!match) return undefined;
+  const n = Number(match[1]);
+  switch ((match[2] ?? 'pa').toLowerCase()) {
+    case 'kpa': return Math.round(n * 1000 * 1e6) / 1e6;
+    case 'bar': return Math.round(n * 1e5 * 1e6) / 1e6;
+    case 'atm': return Math.round(n * 101325 * 1e6) / 1e6;
+    default: return n;
+  }
+}
+
+/** "298.15", "298.15 K" → K; undefined when unreadable. */
+export function readTemperature(text: string): number | undefined {
+  const match = /^\s*(\d+(?:\.\d*)?(?:[eE][+-]?\d+)?)\s*K?\s*$/.exec(text);
+  return match ? Number(match[1]) : undefined;
+}
+
+export function prepareImport(rows: ImportRow[], catalogue: CatalogueView, sources: ImportSources): PreparedImport {
+  const problems: ImportProblem[] = [];
+  const byHill = new Map<string, { id: string; name: string; synonyms: string[]; formula: string }[]>();
+  for (const s of catalogue.speciesById.values()) {
+    const key = `${s.hillFormula}|${s.charge}`;
+    byHill.set(key, [...(byHill.get(key) ?? []), s]);
+  }
+  const newSpecies = new Map<string, { item: ItemInput; line: number }>();
+  const newPhases = new Map<string, { item: ItemInput; line: number }>();
+  const valueItems: { item: ItemInput; line: number; duplicateKey: string; what: string }[] = [];
+  const lineOf = new Map<string, number>();
+  // Files repeat a few formulas many times: each distinct text is parsed once.
+  const formulas = new Map<string, ReturnType<typeof tryParseFormula>>();
+  const parse = (text: string) => {
+    let parsed = formulas.get(text);
+    if (!parsed) formulas.set(text, (parsed = tryParseFormula(text)));
+    return parsed;
+  };
+  const hills = new Map<ParsedFormulaOf, string>();
+
+  for (const row of rows) {
+    const f = row.fields;
+    const before = problems.length;
+    const problem = (field: string, message: string) => problems.push({ line: row.line, field, message });
+
+    if (!f.formula) problem('formula', 'formula is required');
+    const parsed = f.formula ? parse(f.formula) : undefined;
+    if (parsed && !parsed.ok) problem('formula', `formula ${f.formula} cannot be read: ${parsed.error.message}`);
+    const quantity = f.quantity ? QUANTITY_SPELLINGS[f.quantity.trim().toLowerCase()] ?? (['dfH', 'S', 'Cp', 'dfG', 'dtrsH'].includes(f.quantity) ? (f.quantity as Quantity) : undefined) : undefined;
+    if (!f.quantity) problem('quantity', 'quantity is required (dfH, S, Cp, dfG or dtrsH)');
+    else if (!quantity) problem('quantity', `quantity must be dfH, S, Cp, dfG or dtrsH (or ΔfH°, S°, Cp°, ΔfG°, ΔtrsH), got "${f.quantity}"`);
+    if (!f.phase) problem('phase', `phase is required (${PHASE_CODES.join(', ')})`);
+    else if (!(PHASE_CODES as readonly string[]).includes(f.phase)) problem('phase', `phase must be one of ${PHASE_CODES.join(', ')}, got "${f.phase}"`);
+    const pressure = f.pressure === undefined ? undefined : readPressure(f.pressure);
+    if (f.pressure === undefined) problem('pressure', 'pressure is required: the standard pressure the value is given at (100000 Pa, 1 bar, 101325 Pa or 1 atm)');
+    else if (pressure === undefined) problem('pressure', `pressure must be a number of Pa, or with kPa, bar or atm, got "${f.pressure}"`);
+    const temperature = f.temperature === undefined ? 298.15 : readTemperature(f.temperature);
+    if (temperature === undefined) problem('temperature', `temperature must be a number of K, got "${f.temperature}"`);
+
+    let sourceId: string | undefined;
+    const doi = f.doi ? normalizeDoi(f.doi) : undefined;
+    if (f.doi && !doi) problem('doi', `"${f.doi}" is not a DOI`);
+    const byKey = f.sourceKey ? sources.byKey.get(f.sourceKey) : undefined;
+    const byDoi = doi ? sources.byDoi.get(doi) : undefined;
+    if (f.sourceKey && !byKey) problem('sourceKey', `no source with the key "${f.sourceKey}"; create or import it first`);
+    if (doi && !byDoi) problem('doi', `no source with DOI ${doi}; create or import it first`);
+    if (byKey && byDoi && byKey !== byDoi) problem('doi', `sourceKey ${f.sourceKey} and DOI ${doi} name different sources`);
+    sourceId = byKey ?? byDoi;
+    if (!f.sourceKey && !f.doi) problem('sourceKey', 'a source is required (sourceKey or doi): no value without a source');
+
+    if (problems.length > before || !parsed?.ok || !quantity) continue;
+
+    // Which species: the formula as written, else the same Hill formula and charge; a name narrows it down or adds a species.
+    const formula = parsed.formula;
+    let hill = hills.get(formula);
+    if (hill === undefined) hills.set(formula, (hill = hillFormula(formula)));
+    const sameFormula = byHill.get(`${hill}|${formula.charge}`) ?? [];
+    const named = f.name ? sameFormula.filter((s) => [s.name, ...s.synonyms].some((n) => n.toLowerCase() === f.name!.toLowerCase())) : sameFormula;
+    const exact = named.filter((s) => s.formula === f.formula);
+    const candidates = exact.length === 1 ? exact : named;
+    const phase = f.phase as PhaseCode;
+    const polymorph = f.polymorph ?? null;
+    let subject: Record<string, unknown>;
+    let phaseKey: string;
+    if (candidates.length === 1) {
+      const species = candidates[0];
+      const existing = catalogue.phaseOf(species.id, phase, polymorph);
+      if (existing) {
+        subject = { speciesPhaseId: existing.id };
+        phaseKey = existing.id;
+      } else {
+        phaseKey = `${species.id}|${phase}|${polymorph ?? ''}`;
+        if (!newPhases.has(phaseKey)) {
+          const item = { id: randomUUID(), position: 0, kind: 'add_phase' as const, payload: { speciesId: species.id, phase, ...(polymorph ? { polymorph } : {}) }, sourceId: null };
+          newPhases.set(phaseKey, { item, line: row.line });
+        }
+        subject = { speciesId: species.id, phase, ...(polymorph ? { polymorph } : {}) };
+      }
+    } else if (candidates.length > 1) {
+      problem(f.name ? 'name' : 'formula', `${f.formula} matches ${candidates.length} species (${candidates.map((c) => c.name).join(', ')}); give the name`);
+      continue;
+    } else if (!f.name) {
+      problem('name', `${f.formula} (${hill}) is not in the catalogue; give its name to add it`);
+      continue;
+    } else {
+      const speciesKey = `${hill}|${formula.charge}|${f.name.toLowerCase()}`;
+      if (!newSpecies.has(speciesKey)) {
+        newSpecies.set(speciesKey, { item: { id: randomUUID(), position: 0, kind: 'add_species', payload: { formula: f.formula, name: f.name }, sourceId: null }, line: row.line });
+      }
+      phaseKey = `${speciesKey}|${phase}|${polymorph ?? ''}`;
+      if (!newPhases.has(phaseKey)) {
+        newPhases.set(phaseKey, { item: { id: randomUUID(), position: 0, kind: 'add_phase', payload: { species: f.name, phase, ...(polymorph ? { polymorph } : {}) }, sourceId: null }, line: row.line });
+      }
+      subject = { species: f.name, phase, ...(polymorph ? { polymorph } : {}) };
+    }
+
+    // The same quantity of one species phase from one source twice, at the same temperature, is a repeat (Cp at several T is not).
+    const duplicateKey = `${phaseKey}|${quantity}|${f.transition ?? ''}|${sourceId}|${temperature}`;
+
+    const computed = f.method === 'computed';
+    const payload: Record<string, unknown> = subject;
+    payload.quantity = quantity;
+    if (f.transition) payload.transitionKind = f.transition;
+    payload.value = f.value ?? '';
+    payload.unit = f.unit ?? '';
+    if (f.uncertainty) payload.uncertainty = f.uncertainty;
+    if (f.uncertaintyKind) payload.uncertaintyKind = f.uncertaintyKind;
+    if (f.coverageFactor) payload.coverageFactor = f.coverageFactor;
+    payload.temperatureK = temperature;
+    payload.pressurePa = pressure;
+    payload.method = f.method ?? '';
+    if (computed && f.methodDetail) payload.levelOfTheory = f.methodDetail;
+    if (f.sourceLocator) payload.sourceLocator = f.sourceLocator;
+    const note = [f.notes, !computed && f.methodDetail ? `Method: ${f.methodDetail}` : undefined].filter(Boolean).join(' — ');
+    if (note) payload.notes = note;
+    valueItems.push({ item: { id: randomUUID(), position: 0, kind: 'add_value', payload, sourceId: sourceId ?? null }, line: row.line, duplicateKey, what: `${quantity}${f.transition ? ` (${f.transition})` : ''}` });
+  }
+
+  const ordered = [...newSpecies.values(), ...newPhases.values(), ...valueItems];
+  ordered.forEach((entry, index) => {
+    entry.item.position = index + 1;
+    lineOf.set(entry.item.id, entry.line);
+  });
+  const items = ordered.map((e) => e.item);
+  const withProblems = new Set<string>();
+  const columns = new Map<string, ReturnType<typeof itemColumns>>();
+  for (const resolved of resolveItems(items, catalogue)) {
+    columns.set(resolved.item.id, itemColumns(resolved));
+    for (const p of resolved.problems) {
+      problems.push({ line: lineOf.get(resolved.item.id)!, field: COLUMN_OF[p.field] ?? p.field, message: p.message });
+      withProblems.add(resolved.item.id);
+    }
+  }
+  // Repeats among the rows that are otherwise fine.
+  const seen = new Map<string, number>();
+  for (const v of valueItems) {
+    if (withProblems.has(v.item.id)) continue;
+    const first = seen.get(v.duplicateKey);
+    if (first !== undefined) problems.push({ line: v.line, field: 'quantity', message: `line ${first} already gives ${v.what} of this species phase from the same source at the same temperature` });
+    else seen.set(v.duplicateKey, v.line);
+  }
+  problems.sort((a, b) => a.line - b.line);
+  return { items, columns, problems, counts: { species: newSpecies.size, phases: newPhases.size, values: valueItems.length } };
+}
