@@ -1,4 +1,4 @@
-import { mkdirSync, writeFileSync } from 'node:fs';
+import { mkdirSync, renameSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { randomUUID } from 'node:crypto';
 import { SMTPServer } from 'smtp-server';
@@ -40,7 +40,10 @@ export async function startMailCatcher(port: number, outboxDir: string): Promise
             html: typeof parsed.html === 'string' ? parsed.html : '',
           };
           const name = `${mail.receivedAt.replace(/[:.]/g, '-')}-${mail.id}.json`;
-          writeFileSync(path.join(outboxDir, name), JSON.stringify(mail, null, 2));
+          // Written aside, then renamed: a reader never sees half a message.
+          const partial = path.join(outboxDir, `.${name}.partial`);
+          writeFileSync(partial, JSON.stringify(mail, null, 2));
+          renameSync(partial, path.join(outboxDir, name));
           callback();
         })
         .catch((error: Error) => callback(error));

@@ -54,18 +54,30 @@ export async function focused(page: Page): Promise<FocusedElement> {
   // Runs in the page; typed loosely because the e2e build has no DOM library.
   return page.evaluate(() => {
     type Styles = { outlineStyle: string; outlineWidth: string; boxShadow: string; borderStyle: string; display: string; content: string };
-    type Element = { tagName: string; textContent: string | null; getAttribute(name: string): string | null; closest(selector: string): unknown };
+    type Element = {
+      tagName: string;
+      textContent: string | null;
+      getAttribute(name: string): string | null;
+      closest(selector: string): unknown;
+      querySelector(selector: string): Element | null;
+    };
     const global = globalThis as unknown as { document: { activeElement: Element | null }; getComputedStyle(element: Element, pseudo?: string): Styles };
     const element = global.document.activeElement;
     if (!element) {
       return { tag: '', label: '', text: '', focusVisible: false };
     }
     const own = global.getComputedStyle(element);
-    const ring = global.getComputedStyle(element, '::before');
+    // Material draws its focus ring on ::before of the element or of its .mat-focus-indicator child.
+    const ringShown = (host: Element | null) => {
+      if (!host) return false;
+      const ring = global.getComputedStyle(host, '::before');
+      return ring.display !== 'none' && ring.borderStyle !== 'none' && ring.content !== 'none';
+    };
     const focusVisible =
       (own.outlineStyle !== 'none' && own.outlineWidth !== '0px') ||
       own.boxShadow !== 'none' ||
-      (ring.display !== 'none' && ring.borderStyle !== 'none' && ring.content !== 'none') ||
+      ringShown(element) ||
+      ringShown(element.querySelector(':scope > .mat-focus-indicator')) ||
       element.closest('.mat-focused') !== null;
     return {
       tag: element.tagName.toLowerCase(),

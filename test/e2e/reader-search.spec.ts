@@ -65,14 +65,14 @@ describe('a reader looks up values (end to end)', () => {
       const containing = await page.locator(`${RESULT_ROWS} td:first-child`).allTextContents();
       expect(containing.join(' ')).toMatch(/methanol/i);
 
-      await page.getByRole('button', { name: 'only these' }).click();
+      await page.getByRole('radio', { name: 'only these' }).click();
       await page.waitForURL(/elementsMode=only/);
       await page.locator(RESULT_ROWS).first().waitFor();
       const only = (await page.locator(`${RESULT_ROWS} td:first-child`).allTextContents()).join(' ');
       expect(only).toMatch(/ethanol/i);
       expect(only).not.toMatch(/ammonia|nitrogen/i);
 
-      await page.getByLabel('Elements', { exact: true }).fill('C, O');
+      await page.getByRole('textbox', { name: 'Elements' }).fill('C, O');
       await page.waitForURL(/elements=C,O/);
       await page.locator(RESULT_ROWS).first().waitFor();
       expect((await page.locator(`${RESULT_ROWS} td:nth-child(2)`).allTextContents()).map((text) => text.trim())).toEqual(

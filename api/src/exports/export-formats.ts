@@ -8,7 +8,6 @@ import { nasa7Lines, nasa7Record } from './nasa7-format';
 /** What every export states before its data: the release and the sources it cites. */
 export interface ExportHeader {
   release: { label: string; status: string; publishedAt: Date | null };
-  generatedAt: Date;
   /** the query string the export was asked with (filters), for the record */
   query: string;
   sources: SourceRef[];
@@ -58,7 +57,7 @@ export function csvStages(header: ExportHeader): Transform[] {
   const comments = [
     'Kelvindex export (CSV). Values in SI units: J/mol, J/(mol·K), K, Pa. fit_ranges holds a fit\'s ranges as JSON.',
     releaseLine(header),
-    `generated ${header.generatedAt.toISOString()}${header.query ? `; filters: ${header.query}` : ''}`,
+    `filters: ${header.query || 'none'}`,
     'sources:',
     ...header.sources.map((s) => `  [${s.key}] ${s.citation}`),
   ].map((line) => `# ${line.replace(/[\r\n]+/g, ' ')}\n`).join('');
@@ -160,7 +159,6 @@ export function jsonStages(header: ExportHeader): Transform[] {
     format: 'kelvindex-export',
     formatVersion: 1,
     release: header.release,
-    generatedAt: header.generatedAt,
     filters: header.query,
     units: { energy: 'J/mol', entropy: 'J/(mol·K)', heatCapacity: 'J/(mol·K)', temperature: 'K', pressure: 'Pa', molarMass: 'g/mol' },
     sources: header.sources,
@@ -220,7 +218,6 @@ export function xmlStages(header: ExportHeader): Transform[] {
     release: header.release.label,
     releaseStatus: header.release.status,
     publishedAt: header.release.publishedAt,
-    generatedAt: header.generatedAt,
     filters: header.query,
     units: 'SI: J/mol, J/(mol·K), K, Pa; molar mass in g/mol',
   });
@@ -251,7 +248,7 @@ export function nasa7Stages(header: ExportHeader): Transform[] {
     'S/R = a1 ln T + a2 T + a3 T^2/2 + a4 T^3/3 + a5 T^4/4 + a7. Only each species phase\'s recommended NASA-7 fit is written.',
     'Columns 19-24 of each first line hold the release label.',
     releaseLine(header),
-    `generated ${header.generatedAt.toISOString()}${header.query ? `; filters: ${header.query}` : ''}`,
+    `filters: ${header.query || 'none'}`,
     'sources:',
     ...header.sources.map((s) => `  [${s.key}] ${s.citation}`),
   ].map((line) => `! ${line.replace(/[\r\n]+/g, ' ')}\n`).join('');

@@ -46,7 +46,8 @@ export function exportRoutes(ctx: AppContext) {
     res.set('Content-Type', CONTENT_TYPES[format]);
     res.set('Content-Disposition', `attachment; filename="kelvindex-${release.label}.${FILE_EXTENSIONS[format]}"`);
     res.set('X-Kelvindex-Release', release.label);
-    const header = { release: { label: release.label, status: release.status, publishedAt: release.publishedAt }, generatedAt: new Date(), query, sources };
+    // No generation time: an export of a published release is the same bytes forever (ETags, backups).
+    const header = { release: { label: release.label, status: release.status, publishedAt: release.publishedAt }, query, sources };
     try {
       await pipeline([cursor.stream, ...stagesFor(format, header), res]);
     } catch (error) {

@@ -140,6 +140,13 @@ export const workflowPaths: Record<string, Record<string, Schema>> = {
   '/releases/{label}': {
     patch: { tags: ['Releases'], summary: 'Edit the notes of a release in preparation', parameters: [label], requestBody: body(object({ notes: str(undefined, { maxLength: 50000 }) })), responses: { 200: open('the release'), ...errors } },
   },
+  '/releases/{label}/workspace': {
+    get: {
+      tags: ['Releases'], summary: 'The editor\'s view of a release: its proposals, the species phases and quantities still needing one recommended value, and the change log so far',
+      parameters: [label],
+      responses: { 200: open('the release with proposals, needsRecommendation and changeLog'), ...errors },
+    },
+  },
   '/releases/{label}/proposals': {
     post: { tags: ['Releases'], summary: 'Assemble an approved proposal into a release in preparation', parameters: [label], requestBody: body(object({ proposalId: uuid() })), responses: { 200: open('the release'), ...errors } },
   },

@@ -65,6 +65,11 @@ export function releaseEditingRoutes(ctx: AppContext) {
     res.status(201).json(await releases.open(req.user!, body, req));
   });
 
+  /** The release as the editor assembles it: its proposals, the groups still without one recommended member, the change log so far. */
+  r.get('/:label/workspace', EDITOR, async (req, res) => {
+    res.set('Cache-Control', 'no-store').json(await releases.view(releaseLabel(req.params.label)));
+  });
+
   r.post('/:label/proposals', EDITOR, async (req, res) => {
     const label = releaseLabel(req.params.label);
     const body = await validateBody(AddProposalDto, req.body);

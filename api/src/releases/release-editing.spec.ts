@@ -17,6 +17,17 @@ describe('release editing', () => {
     editor = await bearerFor(t.app, 'editor');
   });
 
+  it('shows the editor the release in preparation: its proposals, the groups needing a recommendation and the change log', async () => {
+    const workspace = await request(t.app).get('/api/v1/releases/2027.1/workspace').set('Authorization', editor).expect(200);
+    expect(workspace.body).toEqual(jasmine.objectContaining({ label: '2027.1', status: 'preparing' }));
+    expect(workspace.body.proposals.map((p: { id: string }) => p.id)).toContain(seedId('proposal', 'approved-ethyl-acetate'));
+    expect(Array.isArray(workspace.body.needsRecommendation)).toBeTrue();
+    expect(workspace.body.changeLog).toEqual(jasmine.objectContaining({ release: '2027.1', comparedWith: '2026.2' }));
+    expect(workspace.body.changeLog.species.some((s: { name: string }) => /ethyl acetate/i.test(s.name))).toBeTrue();
+    await request(t.app).get('/api/v1/releases/2027.1/workspace').set('Authorization', await bearerFor(t.app, 'steward')).expect(403);
+    await request(t.app).get('/api/v1/releases/1999.1/workspace').set('Authorization', editor).expect(404);
+  });
+
   it('opens a release only after the one in preparation is published, and only after the latest label', async () => {
     const preparing = await call('post', '/releases').send({ label: '2027.2' }).expect(409);
     expect(preparing.body.message).toMatch(/2027\.1 is in preparation/);

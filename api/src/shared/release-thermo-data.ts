@@ -12,6 +12,7 @@ import type { PhaseCode } from '../species/phase-code';
 import { phaseLabel } from '../species/phase-code';
 import type { FitForm, UncertaintyKind } from '../values/value-vocabulary';
 import { citedSourceJoin } from '../sources/cited-source';
+import { anchorFitEntropy } from './entropy-anchor';
 
 /**
  * What a release holds for computing with one species in one phase: the recommended ΔfH°, S°,
@@ -310,6 +311,15 @@ export function computable(record: PhaseThermoRecord): ComputableSpecies {
     heatCapacitySource = cpValue ? 'value' : 'none';
   }
   const fitCarriesEntropy = heatCapacitySource === 'fit' && (record.fit!.form === 'nasa7' || record.fit!.form === 'nasa9' || record.fit!.form === 'shomate');
+  if (fitCarriesEntropy && s && heatCapacity) {
+    const anchored = anchorFitEntropy(heatCapacity, entropyValue);
+    heatCapacity = anchored.fn;
+    if (Math.abs(anchored.shift) >= 0.0005) {
+      notes.push(
+        `The ${record.fit!.form} fit of ${label} (${record.fit!.sourceKey}) gives S°(298.15 K) ${anchored.shift > 0 ? 'lower' : 'higher'} by ${Math.abs(anchored.shift).toFixed(3)} J/(mol·K) than the recommended S° (${s.sourceKey}); its entropy is anchored to the recommended value.`,
+      );
+    }
+  }
   const hasEntropy = s !== undefined || fitCarriesEntropy;
   return {
     record,
