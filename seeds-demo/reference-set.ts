@@ -1,3 +1,4 @@
+import { NASA_TM_4513_SETS } from '../api/src/reference-data/nasa-tm-4513';
 import type { Quantity, TransitionKind } from '../api/src/values/value-vocabulary';
 import type { PhaseCode } from '../api/src/species/phase-code';
 
@@ -341,41 +342,37 @@ export interface ReferenceFit {
   reading: string;
 }
 
+/** A TM-4513 set as a two-range fit row, 200–1000–6000 K. */
+function tm4513Fit(species: keyof typeof NASA_TM_4513_SETS, release: ReferenceRelease, reading: string): ReferenceFit {
+  const set = NASA_TM_4513_SETS[species];
+  return {
+    key: `nasa-tm-4513:${species}(g)`,
+    species,
+    phase: 'g',
+    source: 'nasa-tm-4513',
+    release,
+    tMin: 200,
+    tMax: 6000,
+    reading,
+    ranges: [
+      { tMin: 200, tMax: 1000, coefficients: [...set.low] },
+      { tMin: 1000, tMax: 6000, coefficients: [...set.high] },
+    ],
+  };
+}
+
 /**
- * NASA 7-coefficient polynomials (McBride, Gordon & Reno, NASA TM-4513, 1993), digits as in
- * published-values.md (a public copy attributing them to TM-4513). Checked against JANAF 1998
- * Cp° at 298.15 K and 1000 K in reference-set.spec. No other gases are given: none is known
- * reliably enough here.
+ * NASA 7-coefficient polynomials (McBride, Gordon & Reno, NASA TM-4513, 1993); the coefficients
+ * and where each copy comes from are in api/src/reference-data/nasa-tm-4513.ts. N2 and H2O are
+ * checked against JANAF 1998 in reference-set.spec; the others by the engine's specs (JANAF rows
+ * for O2, H2, CO, NH3) and, for CO2 and CH4, against the CODATA/NBS S° and Cp° at 298.15 K.
  */
 export const REFERENCE_FITS: ReferenceFit[] = [
-  {
-    key: 'nasa-tm-4513:N2(g)',
-    species: 'N2',
-    phase: 'g',
-    source: 'nasa-tm-4513',
-    release: '2026.1',
-    tMin: 200,
-    tMax: 6000,
-    reading: 'as reproduced in a public copy attributing them to TM-4513',
-    ranges: [
-      { tMin: 200, tMax: 1000, coefficients: [3.53100528, -1.23660987e-4, -5.02999437e-7, 2.43530612e-9, -1.40881235e-12, -1046.97628, 2.96747468] },
-      { tMin: 1000, tMax: 6000, coefficients: [2.95257626, 1.39690057e-3, -4.92631691e-7, 7.86010367e-11, -4.60755321e-15, -923.948645, 5.87189252] },
-    ],
-  },
-  {
-    key: 'nasa-tm-4513:H2O(g)',
-    species: 'H2O',
-    phase: 'g',
-    source: 'nasa-tm-4513',
-    release: '2026.2',
-    tMin: 200,
-    tMax: 6000,
-    reading: 'as reproduced in a public copy attributing them to TM-4513',
-    ranges: [
-      { tMin: 200, tMax: 1000, coefficients: [4.19864056, -2.0364341e-3, 6.52040211e-6, -5.48797062e-9, 1.77197817e-12, -30293.7267, -0.849032208] },
-      { tMin: 1000, tMax: 6000, coefficients: [2.67703787, 2.97318329e-3, -7.7376969e-7, 9.44336689e-11, -4.26900959e-15, -29885.8938, 6.88255571] },
-    ],
-  },
+  tm4513Fit('N2', '2026.1', 'as reproduced in a public copy attributing them to TM-4513'),
+  tm4513Fit('H2O', '2026.2', 'as reproduced in a public copy attributing them to TM-4513'),
+  ...(['H2', 'O2', 'CO', 'CO2', 'CH4', 'NH3'] as const).map((species) =>
+    tm4513Fit(species, '2026.2', "as reproduced in Cantera's data/nasa_gas.yaml, which cites TM-4513"),
+  ),
 ];
 
 /** Splits "cr, graphite" into phase code and polymorph. */

@@ -52,10 +52,20 @@ describe('reads on a streaming replica', () => {
     expect(replicated).toBeTrue();
   }, 60_000);
 
+  it('answers the query API (raw SQL reads) from the replica too', async () => {
+    const search = await fetch(`${server.url}/api/v1/species?formula=H2O`);
+    expect(search.status).toBe(200);
+    expect(((await search.json()) as { total: number }).total).toBeGreaterThan(0);
+    const onReplica = Number(replica.psql(`SELECT count(*) FROM pg_stat_activity WHERE datname = 'kelvindex' AND query ILIKE '%species%'`).trim());
+    expect(onReplica).toBeGreaterThan(0);
+  }, 60_000);
+
   it('keeps serving reads from the primary when the replica goes away', async () => {
     await replica.stop(false);
     const users = await server.dataSource.getRepository(User).find();
     expect(users.length).toBeGreaterThan(0);
+    const search = await fetch(`${server.url}/api/v1/species?formula=CO2`);
+    expect(search.status).toBe(200);
     const res = await fetch(`${server.url}/api/v1/auth/login`, {
       method: 'POST',
       headers: { 'Content-Type': 'application/json' },

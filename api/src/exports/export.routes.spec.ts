@@ -127,7 +127,9 @@ describe('export API', () => {
     expect(records[0]).toBe('THERMO');
     expect(records[records.length - 1]).toBe('END');
     const cards = records.slice(2, -1);
-    expect(cards.length).toBe(8);
+    // 2026.2 recommends a TM-4513 polynomial for eight gases (seeds-demo/reference-set.ts).
+    expect(cards.length).toBe(8 * 4);
+    expect(cards.filter((_, i) => i % 4 === 0).map((c) => c.slice(0, 18).trim()).sort()).toEqual(['CH4', 'CO', 'CO2', 'H2', 'H2O', 'N2', 'NH3', 'O2']);
     for (const [i, card] of cards.entries()) {
       expect(card.length).withContext(card).toBe(80);
       expect(card[79]).toBe(String((i % 4) + 1));

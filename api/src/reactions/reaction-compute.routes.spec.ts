@@ -91,20 +91,21 @@ describe('reaction computations API', () => {
       expect(wrongPhase.body.details.missing).toEqual(['CO2(cr)']);
       expect(wrongPhase.body.details.suggestions['CO2(cr)'][0]).toEqual(jasmine.objectContaining({ name: 'carbon dioxide', phase: 'g' }));
 
-      // Only N2(g) and H2O(g) carry polynomials: away from 298.15 K the others cannot be evaluated.
-      const outOfRange = await post('evaluate', { equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', temperatures: [298.15, 700], release: '2026.2' }).expect(422);
+      // The TM-4513 polynomials hold from 200 K to 6000 K: beyond that every species is out of range.
+      const outOfRange = await post('evaluate', { equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', temperatures: [298.15, 7000], release: '2026.2' }).expect(422);
       const labels = outOfRange.body.details.outOfRange.map((o: { species: string }) => o.species).sort();
-      expect(labels).toEqual(['H2(g)', 'NH3(g)']);
-      expect(outOfRange.body.details.outOfRange[0]).toEqual(jasmine.objectContaining({ tMin: 298.15, tMax: 298.15, temperatures: [700] }));
+      expect(labels).toEqual(['H2(g)', 'N2(g)', 'NH3(g)']);
+      expect(outOfRange.body.details.outOfRange[0]).toEqual(jasmine.objectContaining({ tMin: 200, tMax: 6000, temperatures: [7000] }));
     });
 
     it('extrapolates only when asked, and flags what it extrapolated', async () => {
-      // H2(g) and NH3(g) carry only a Cp° value (valid at 298.15 K); extrapolate=true holds it constant.
-      const res = await post('evaluate', { equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', temperatures: [298.15, 700], extrapolate: true, release: '2026.2' }).expect(200);
-      expect(res.body.results.map((r: { T: number; extrapolated: boolean }) => [r.T, r.extrapolated])).toEqual([[298.15, false], [700, true]]);
+      // Beyond the polynomials' 6000 K the ranges are extended only when asked, and flagged.
+      const res = await post('evaluate', { equation: 'N2(g) + 3 H2(g) -> 2 NH3(g)', temperatures: [298.15, 7000], extrapolate: true, release: '2026.2' }).expect(200);
+      expect(res.body.results.map((r: { T: number; extrapolated: boolean }) => [r.T, r.extrapolated])).toEqual([[298.15, false], [7000, true]]);
       expect(res.body.notes.join(' ')).toContain('extrapolated');
-      // Kirchhoff: ΔrH°(700) − ΔrH°(298.15) = ∫ΔrCp dT, and ΔrCp° < 0 here, so ΔrH° becomes more negative.
-      expect(res.body.results[1].deltaH.value).toBeLessThan(res.body.results[0].deltaH.value);
+      // The extrapolated row still obeys ΔrG° = ΔrH° − T·ΔrS° (common practice; kJ vs J/K units).
+      const hot = res.body.results[1];
+      expect(hot.deltaG.value).toBeCloseTo(hot.deltaH.value - (7000 * hot.deltaS.value) / 1000, 6);
       await post('evaluate', { equation: 'N2(g) -> N2(g)' }).expect(422);
     });
 

@@ -1,3 +1,4 @@
+import { replicaReads } from '../db/replica-reads';
 import type { AppContext } from '../app-context';
 import { securedRouter } from '../auth/access';
 import { openApiValidation } from '../openapi/request-validation';
@@ -14,8 +15,9 @@ import { ReactionComputeService } from './reaction-compute.service';
 export function reactionComputeRoutes(ctx: AppContext) {
   const r = securedRouter('/reactions', ctx.config.publicRead);
   const validate = openApiValidation(ctx);
-  const releases = releaseResolver(ctx.dataSource);
-  const reactions = new ReactionComputeService(ctx.dataSource);
+  const reads = replicaReads(ctx.dataSource);
+  const releases = releaseResolver(reads);
+  const reactions = new ReactionComputeService(reads);
 
   r.post('/evaluate', 'read', ...validate, async (req, res) => {
     const body = await validateBody(EvaluateReactionDto, req.body);

@@ -44,7 +44,8 @@ describe('releases API', () => {
     const res = await request(t.app).get('/api/v1/releases/2026.2').expect(200);
     expect(res.body).toEqual(jasmine.objectContaining({ label: '2026.2', status: 'published', comparedWith: '2026.1' }));
     expect(res.body.counts.species).toBeGreaterThan(10);
-    expect(res.body.counts.fits).toBe(2);
+    // N2(g) from 2026.1, then H2O(g), H2, O2, CO, CO2, CH4 and NH3 (g) added in 2026.2.
+    expect(res.body.counts.fits).toBe(8);
     const log: Change[] = res.body.changeLog;
     // Version 2 of ΔfH°(C, g) adds the uncertainty CODATA 1989 prints (± 0.45 kJ/mol).
     const carbon = log.find((c) => c.name === 'carbon' && c.phase === 'g' && c.quantity === 'dfH');
@@ -53,9 +54,11 @@ describe('releases API', () => {
     // The duplicate NBS entry of ΔfH°(CO, g) is retired.
     const retired = log.filter((c) => c.change === 'retired');
     expect(retired.map((c) => [c.name, c.quantity, c.reason, c.before?.source, c.after])).toEqual([['carbon monoxide', 'dfH', 'retired', 'nbs-1982', null]]);
-    // The TM-4513 polynomial of H2O(g) arrives; JANAF takes over as recommended source of CH4(g).
-    const fit = log.find((c) => c.kind === 'fit');
-    expect(fit).toEqual(jasmine.objectContaining({ name: 'water', phase: 'g', change: 'added' }));
+    // The TM-4513 polynomials of seven gases arrive; JANAF takes over as recommended source of CH4(g).
+    const fits = log.filter((c) => c.kind === 'fit');
+    expect(fits.map((c) => c.name).sort()).toEqual(['ammonia', 'carbon dioxide', 'carbon monoxide', 'hydrogen', 'methane', 'oxygen', 'water']);
+    expect(fits.every((c) => c.change === 'added')).toBeTrue();
+    const fit = fits.find((c) => c.name === 'water');
     expect(fit!.after).toEqual(jasmine.objectContaining({ form: 'nasa7', source: 'nasa-tm-4513', recommended: true }));
     const methane = log.filter((c) => c.name === 'methane' && c.quantity === 'dfH');
     expect(methane.map((c) => [c.change, c.reason])).toEqual(jasmine.arrayWithExactContents([['added', 'new lineage'], ['revised', 'no longer recommended']]));

@@ -1,3 +1,4 @@
+import { replicaReads } from '../db/replica-reads';
 import type { Response } from 'express';
 import type { AppContext } from '../app-context';
 import { securedRouter } from '../auth/access';
@@ -18,7 +19,8 @@ function labelParam(value: string | string[] | undefined, name: string): string 
 /** The release listing, one release with its change log, and the changes between two releases. */
 export function releasesRoutes(ctx: AppContext) {
   const r = securedRouter('/releases', ctx.config.publicRead);
-  const releases = new ReleasesService(ctx.dataSource);
+  const reads = replicaReads(ctx.dataSource);
+  const releases = new ReleasesService(reads);
   const validate = openApiValidation(ctx);
   const cacheFor = (res: Response, published: boolean, explicit: boolean) =>
     setReleaseCaching(res, { status: published ? 'published' : 'preparing', explicit }, ctx.config.publicRead);

@@ -6,7 +6,7 @@ import { CODATA_1989, JANAF, NBS_1982 } from '../thermo/testing/published-values
 
 // The demo database holds the reference releases of seeds-demo/reference-set.ts: 2026.1 (CODATA 1989,
 // NBS 1982, the TM-4513 polynomial of N2) and 2026.2 (adds JANAF 1998 at 298.15 K and the TM-4513
-// polynomial of H2O(g)); 2027.1 is in preparation. Recommended: CODATA, then JANAF / NASA, then NBS.
+// polynomials of H2O, H2, O2, CO, CO2, CH4 and NH3 (g)); 2027.1 is in preparation. Recommended: CODATA, then JANAF / NASA, then NBS.
 
 interface Summary {
   id: string;
@@ -209,9 +209,13 @@ describe('species API', () => {
       expectWithin(row.HminusH298.value, janaf.dh, 0.005, 'H° − H°(298.15 K) / (kJ/mol)');
       expectWithin(row.gibbsEnergyFunction.value, janaf.gef, 0.01, '−(G° − H°298)/T / (J/(mol·K))');
       expect([row.Cp.unit, row.HminusH298.unit]).toEqual(['J/(mol·K)', 'kJ/mol']);
-      // ΔfH°(T) needs H2(g) and O2(g) at 1000 K, for which the release holds no fit: null, with a note.
-      expect([row.deltaFH, row.deltaFG, row.log10Kf]).toEqual([null, null, null]);
-      expect(res.body.notes.join(' ')).toContain('H2(g)');
+      // ΔfH°(T), ΔfG°(T) and log10 Kf use the TM-4513 polynomials of H2(g) and O2(g) in the same
+      // release; NIST-JANAF (Chase 1998), H2O(g) at 1000 K: ΔfH° = −247.857, ΔfG° = −192.590 kJ/mol.
+      expectWithin(row.deltaFH.value, janaf.dfH, 0.02, 'ΔfH°(1000 K) / (kJ/mol)');
+      expectWithin(row.deltaFG.value, janaf.dfG, 0.03, 'ΔfG°(1000 K) / (kJ/mol)');
+      expectWithin(row.log10Kf.value, (-janaf.dfG * 1000) / (8.314462618 * 1000 * Math.LN10), 0.002, 'log10 Kf(1000 K)');
+      // The fit's own S°(298.15 K) differs from CODATA's recommended value by a few thousandths: said in a note.
+      expect(res.body.notes.join(' ')).toContain('anchored to the recommended value');
       // At 298.15 K: ΔfH° is CODATA 1989's; ΔfG° from it and S° of H2O(g), H2(g), O2(g) agrees with JANAF's −228.582 kJ/mol.
       const at298 = res.body.rows[0];
       expectWithin(at298.deltaFH.value, CODATA_1989['H2O(g)'].dfH[0], 1e-9, 'ΔfH°(298.15 K)');

@@ -1,3 +1,4 @@
+import { replicaReads } from '../db/replica-reads';
 import type { AppContext } from '../app-context';
 import { securedRouter } from '../auth/access';
 import { openApiValidation } from '../openapi/request-validation';
@@ -15,9 +16,10 @@ import { SpeciesService } from './species.service';
 export function speciesRoutes(ctx: AppContext) {
   const validate = openApiValidation(ctx);
   const r = securedRouter('/species', ctx.config.publicRead);
-  const releases = releaseResolver(ctx.dataSource);
-  const species = new SpeciesService(ctx.dataSource);
-  const properties = new SpeciesPropertiesService(ctx.dataSource);
+  const reads = replicaReads(ctx.dataSource);
+  const releases = releaseResolver(reads);
+  const species = new SpeciesService(reads);
+  const properties = new SpeciesPropertiesService(reads);
 
   r.get('/', 'read', ...validate, async (req, res) => {
     const filter = speciesFilterFromQuery(req);
