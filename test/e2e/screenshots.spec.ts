@@ -19,6 +19,11 @@ const MAIN_PAGES: readonly MainPage[] = [
     url: '/search?q=H2O',
     ready: async (page) => {
       await page.locator('table.kx-results-table tr.mat-mdc-row a', { hasText: /water/i }).first().click();
+      await page.waitForURL(/\/species\//);
+      // Water vapour: the phase with a heat-capacity polynomial, so the plots have curves to draw.
+      const url = new URL(page.url());
+      url.searchParams.set('phase', 'g');
+      await page.goto(url.pathname + url.search);
       await page.locator('.kx-property-table tr.mat-mdc-row').first().waitFor();
       await waitForChart(page, 'kx-property-plots');
     },

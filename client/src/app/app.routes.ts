@@ -1,5 +1,6 @@
 import { Routes } from '@angular/router';
 
+import { roleGuard } from './core/role-guard';
 import { signedInGuard } from './core/signed-in-guard';
 
 // Every page is its own lazy chunk; the initial bundle holds only the shell.
@@ -44,6 +45,36 @@ export const routes: Routes = [
     path: 'account',
     canMatch: [signedInGuard],
     loadChildren: () => import('./account/account.routes').then((m) => m.ACCOUNT_ROUTES),
+  },
+  {
+    path: 'proposals',
+    canMatch: [roleGuard('steward', 'reviewer', 'editor', 'admin')],
+    loadChildren: () => import('./proposals/proposals.routes').then((m) => m.PROPOSAL_ROUTES),
+  },
+  {
+    path: 'reviews',
+    canMatch: [roleGuard('steward', 'reviewer', 'editor', 'admin')],
+    loadChildren: () => import('./reviews/reviews.routes').then((m) => m.REVIEW_ROUTES),
+  },
+  {
+    path: 'imports',
+    canMatch: [roleGuard('steward')],
+    title: 'Import values · Kelvindex',
+    loadComponent: () => import('./imports/import-page').then((m) => m.ImportPage),
+  },
+  {
+    path: 'releases',
+    loadChildren: () => import('./releases/releases.routes').then((m) => m.RELEASE_ROUTES),
+  },
+  {
+    path: 'sources',
+    canMatch: [roleGuard('steward', 'editor')],
+    loadChildren: () => import('./sources/sources.routes').then((m) => m.SOURCE_ROUTES),
+  },
+  {
+    path: 'admin',
+    canMatch: [roleGuard('admin')],
+    loadChildren: () => import('./admin/admin.routes').then((m) => m.ADMIN_ROUTES),
   },
   {
     path: 'not-allowed',

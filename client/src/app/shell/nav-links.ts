@@ -17,6 +17,11 @@ export const NAV_LINKS: readonly NavLink[] = [
   { path: '/', label: 'Overview', exact: true },
   { path: '/search', label: 'Search' },
   { path: '/reactions', label: 'Reactions' },
+  { path: '/proposals', label: 'Proposals', access: ['steward'] },
+  { path: '/reviews', label: 'Reviews', access: ['reviewer'] },
+  { path: '/releases', label: 'Releases', access: ['steward', 'reviewer', 'editor', 'admin'] },
+  { path: '/sources', label: 'Sources', access: ['editor'] },
+  { path: '/admin', label: 'Admin', access: ['admin'] },
   { path: '/account', label: 'Account', access: 'signed-in' },
 ];
 

@@ -57,11 +57,13 @@ describe('Toolbar', () => {
     user.set({ id: 2, email: 'steward@kelvindex.test', name: 'Tomasz Okafor', roles: ['reader', 'steward'] });
     await fixture.whenStable();
 
-    expect(navLabels()).toEqual(['Overview', 'Search', 'Reactions', 'Account']);
+    expect(navLabels()).toEqual(['Overview', 'Search', 'Reactions', 'Proposals', 'Releases', 'Account']);
     expect(host.querySelector('.kx-sign-in')).toBeNull();
     const menuButton = host.querySelector<HTMLButtonElement>('.kx-user-button')!;
-    expect(menuButton.getAttribute('aria-label')).toBe('Your account: Tomasz Okafor');
-    expect(menuButton.textContent).toContain('TO');
+    expect(menuButton.querySelector('.kx-visually-hidden')!.textContent).toBe('Your account: ');
+    expect(menuButton.querySelector('.kx-user-name')!.textContent).toBe('Tomasz Okafor');
+    expect(menuButton.querySelector('.kx-user-initials')!.textContent).toBe('TO');
+    expect(menuButton.querySelector('.kx-user-initials')!.getAttribute('aria-hidden')).toBe('true');
   });
 
   it('signs out from the personal menu and returns to the overview', async () => {

@@ -54,7 +54,7 @@ export function chargeText(charge: number | null | undefined): string {
 })
 export class Formula {
   readonly formula = input.required<string>();
-  readonly charge = input(0, { transform: (value: number | null | undefined) => chargeText(value) });
+  readonly charge = input<string, number | null | undefined>('', { transform: chargeText });
 
   protected readonly parts = computed(() => formulaParts(this.formula()));
 }

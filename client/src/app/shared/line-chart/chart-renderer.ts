@@ -46,7 +46,8 @@ export function drawLineChart(canvas: HTMLCanvasElement, config: LineChartConfig
           min: range && span > 0 ? Math.max(0, range.min - RANGE_MARGIN * span) : undefined,
           max: range && span > 0 ? range.max + RANGE_MARGIN * span : undefined,
           title: { display: true, text: config.xLabel, color: colors.text, font },
-          ticks: { color: colors.text, font },
+          // Round tick values only: the widened ends of a valid range are not round numbers.
+          ticks: { color: colors.text, font, includeBounds: false },
           grid: { color: colors.grid },
         },
         y: {

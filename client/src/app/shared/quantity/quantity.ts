@@ -22,17 +22,22 @@ export class Quantity {
   readonly uncertainty = input<number | null | undefined>(null);
   readonly unit = input<string>('');
 
-  protected readonly text = computed(() => {
-    const value = this.value();
-    if (value === null) {
-      return null;
-    }
-    const rounded = roundToUncertainty(value, this.uncertainty());
-    const number = rounded.uncertainty === null ? rounded.value : `${rounded.value} ± ${rounded.uncertainty}`;
-    if (rounded.exponent === null) {
-      return number;
-    }
-    const power = `10${[...String(rounded.exponent)].map((c) => SUPERSCRIPT_DIGITS[c]).join('')}`;
-    return rounded.uncertainty === null ? `${number} × ${power}` : `(${number}) × ${power}`;
-  });
+  protected readonly text = computed(() => quantityText(this.value(), this.uncertainty()));
+}
+
+/**
+ * A value and its uncertainty as one string, rounded as `roundToUncertainty` describes, with a
+ * shared power of ten where needed: `-241.826 ± 0.042`, `(1.235 ± 0.032) × 10⁻⁵`. Null for no value.
+ */
+export function quantityText(value: number | null, uncertainty: number | null | undefined): string | null {
+  if (value === null) {
+    return null;
+  }
+  const rounded = roundToUncertainty(value, uncertainty);
+  const number = rounded.uncertainty === null ? rounded.value : `${rounded.value} ± ${rounded.uncertainty}`;
+  if (rounded.exponent === null) {
+    return number;
+  }
+  const power = `10${[...String(rounded.exponent)].map((c) => SUPERSCRIPT_DIGITS[c]).join('')}`;
+  return rounded.uncertainty === null ? `${number} × ${power}` : `(${number}) × ${power}`;
 }

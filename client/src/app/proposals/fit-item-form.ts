@@ -1,0 +1,144 @@
+import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, computed, inject, input, output, signal, viewChild } from '@angular/core';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
+import { ReactiveFormsModule } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatSelectModule } from '@angular/material/select';
+import { map, startWith } from 'rxjs';
+
+import { findPhase } from '../shared/catalogue/catalogue-api';
+import { ProposalItem } from '../shared/proposals/proposal';
+import { COEFFICIENT_COUNTS, FIT_FORMS, METHODS, STANDARD_PRESSURES } from '../shared/vocabulary/thermo-vocabulary';
+import { catalogueRecord } from './catalogue-record';
+import { FitEntryForm, fitEntryForm, fitEntryFromPayload, fitPayload, fitRangeForm, fitRanges, revalidateFit } from './fit-entry-rules';
+import { FitPlot } from './fit-plot';
+import { ItemDraft, prerequisitesFor } from './item-draft';
+import { SourceChoice, SourcePicker } from '../shared/sources/source-picker';
+import { CompleteSubject, SpeciesChoice, Subject, subjectComplete, subjectOf, subjectPayload } from './subject';
+import { SubjectPicker } from './subject-picker';
+
+/**
+ * A heat-capacity fit (add_fit, or replace_fit for a new version of a catalogue fit): its form,
+ * ranges and coefficients, pasted or typed, with a live plot against the species phase's data.
+ */
+@Component({
+  selector: 'kx-fit-item-form',
+  imports: [FitPlot, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule, SourcePicker, SubjectPicker],
+  templateUrl: './fit-item-form.html',
+  styleUrls: ['./item-forms.scss', './fit-item-form.scss'],
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class FitItemForm implements OnInit {
+  private readonly destroyRef = inject(DestroyRef);
+  private readonly subjectPicker = viewChild(SubjectPicker);
+  private readonly sourcePicker = viewChild(SourcePicker);
+
+  readonly proposed = input<readonly SpeciesChoice[]>([]);
+  readonly addedPhases = input<ReadonlyMap<string, readonly { phase: string; polymorph: string | null }[]>>(new Map());
+  readonly item = input<ProposalItem | null>(null);
+  readonly knownSpecies = input<SpeciesChoice | null>(null);
+  readonly save = output<ItemDraft>();
+  readonly cancel = output<void>();
+
+  protected readonly form: FitEntryForm = fitEntryForm();
+  protected readonly subject = signal<Subject | null>(null);
+  protected readonly source = signal<SourceChoice | null>(null);
+  /** The catalogue fit this one replaces (replace_fit), or null for a new fit. */
+  protected readonly replaces = signal<string | null>(null);
+  protected readonly submitted = signal(false);
+
+  protected readonly forms = FIT_FORMS;
+  protected readonly methods = METHODS;
+  protected readonly pressures = STANDARD_PRESSURES;
+
+  private readonly entry = toSignal(this.form.valueChanges.pipe(startWith(null), map(() => this.form.getRawValue())), {
+    initialValue: this.form.getRawValue(),
+  });
+  protected readonly fitForm = computed(() => this.entry().form);
+  protected readonly tabulated = computed(() => this.fitForm() === 'tabulated');
+  protected readonly coefficientHint = computed(() => {
+    const form = this.fitForm();
+    return form === 'tabulated' ? 'One “T Cp” pair per line (K, J/(mol·K))' : `${COEFFICIENT_COUNTS[form]} numbers, in order; paste them as printed`;
+  });
+  protected readonly plotRanges = computed(() => fitRanges(this.entry()));
+  protected readonly computedMethod = computed(() => this.entry().method === 'computed');
+  private readonly record = catalogueRecord(computed(() => this.subject()?.species.id ?? null));
+  protected readonly existingPhase = computed(() => {
+    const record = this.record();
+    const subject = this.subject();
+    return record && subject?.phase && !subject.newPhase ? findPhase(record, subject.phase, subject.polymorph) ?? null : null;
+  });
+  protected readonly existingFits = computed(() => this.existingPhase()?.fits ?? []);
+
+  ngOnInit(): void {
+    const item = this.item();
+    if (item) {
+      const entry = fitEntryFromPayload(item.payload);
+      this.form.controls.ranges.clear();
+      for (const range of entry.ranges) {
+        this.form.controls.ranges.push(fitRangeForm(range));
+      }
+      const { ranges: _ranges, ...rest } = entry;
+      this.form.patchValue(rest);
+      if (item.kind === 'replace_fit') {
+        this.replaces.set(String(item.payload['fitId'] ?? ''));
+      }
+      const known = [...this.proposed(), ...(this.knownSpecies() ? [this.knownSpecies()!] : [])];
+      this.subject.set(subjectOf(item.payload, known));
+      if (item.source) {
+        this.source.set({ id: item.source.id, shortKey: item.source.shortKey, title: item.source.title });
+      }
+    }
+    revalidateFit(this.form);
+    this.form.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe(() => revalidateFit(this.form));
+  }
+
+  protected rangeError(index: number): string {
+    const range = this.form.controls.ranges.at(index);
+    if (!range.touched && !this.submitted()) {
+      return '';
+    }
+    const errors = range.errors ?? {};
+    return [errors['range'], errors['numbers']].filter(Boolean).join(' ');
+  }
+
+  protected rangesError(): string {
+    return (this.form.controls.ranges.errors?.['ranges'] as string | undefined) ?? '';
+  }
+
+  protected addRange(): void {
+    const ranges = this.form.controls.ranges;
+    const last = ranges.at(ranges.length - 1)?.getRawValue();
+    ranges.push(fitRangeForm({ tMin: last?.tMax ?? '' }));
+  }
+
+  protected removeRange(index: number): void {
+    this.form.controls.ranges.removeAt(index);
+  }
+
+  protected saveFit(): void {
+    this.submitted.set(true);
+    revalidateFit(this.form);
+    const subject = this.subject();
+    const replaces = this.replaces();
+    if (this.form.invalid || !this.source() || (!replaces && !subjectComplete(subject))) {
+      this.form.markAllAsTouched();
+      this.subjectPicker()?.touch();
+      this.sourcePicker()?.touch();
+      return;
+    }
+    const payload = fitPayload(this.form.getRawValue());
+    if (replaces) {
+      this.save.emit({ kind: 'replace_fit', payload: { fitId: replaces, ...payload }, sourceId: this.source()!.id, prerequisites: [] });
+      return;
+    }
+    const complete = subject as CompleteSubject;
+    this.save.emit({
+      kind: 'add_fit',
+      payload: { ...subjectPayload(complete), ...payload },
+      sourceId: this.source()!.id,
+      prerequisites: this.item() ? [] : prerequisitesFor(complete),
+    });
+  }
+}

@@ -1,0 +1,181 @@
+import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, computed, inject, input, output, signal, viewChild } from '@angular/core';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
+import { ReactiveFormsModule } from '@angular/forms';
+import { MatButtonModule } from '@angular/material/button';
+import { MatButtonToggleModule } from '@angular/material/button-toggle';
+import { MatFormFieldModule } from '@angular/material/form-field';
+import { MatInputModule } from '@angular/material/input';
+import { MatRadioModule } from '@angular/material/radio';
+import { MatSelectModule } from '@angular/material/select';
+import { startWith } from 'rxjs';
+
+import { CatalogueValue, findPhase, valuesOf } from '../shared/catalogue/catalogue-api';
+import { ProposalItem } from '../shared/proposals/proposal';
+import { Quantity } from '../shared/quantity/quantity';
+import { convertFromSi } from '../shared/unit-selector/molar-energy-unit';
+import {
+  METHODS,
+  QUANTITIES,
+  QuantityCode,
+  STANDARD_PRESSURES,
+  TRANSITIONS,
+  unitsFor,
+} from '../shared/vocabulary/thermo-vocabulary';
+import { catalogueRecord } from './catalogue-record';
+import { ItemDraft, prerequisitesFor } from './item-draft';
+import { SourceChoice, SourcePicker } from '../shared/sources/source-picker';
+import { CompleteSubject, SpeciesChoice, Subject, subjectComplete, subjectOf, subjectPayload } from './subject';
+import { SubjectPicker } from './subject-picker';
+import { ValueEntry, entryFromPayload, revalidateDependents, valueEntryForm, valueEntryMessage, valuePayload } from './value-entry-rules';
+
+let nextFormId = 0;
+
+/**
+ * A value with its uncertainty, standard state, method and source: a new value (add_value) or a
+ * new version of one in the catalogue (revise_value). Validation messages appear as the steward
+ * types; the existing values of the species phase and quantity are listed to compare with.
+ */
+@Component({
+  selector: 'kx-value-item-form',
+  imports: [
+    MatButtonModule,
+    MatButtonToggleModule,
+    MatFormFieldModule,
+    MatInputModule,
+    MatRadioModule,
+    MatSelectModule,
+    Quantity,
+    ReactiveFormsModule,
+    SourcePicker,
+    SubjectPicker,
+  ],
+  templateUrl: './value-item-form.html',
+  styleUrl: './item-forms.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ValueItemForm implements OnInit {
+  private readonly destroyRef = inject(DestroyRef);
+  private readonly subjectPicker = viewChild(SubjectPicker);
+  private readonly sourcePicker = viewChild(SourcePicker);
+
+  /** Species and phases the proposal adds, to offer in the pickers. */
+  readonly proposed = input<readonly SpeciesChoice[]>([]);
+  readonly addedPhases = input<ReadonlyMap<string, readonly { phase: string; polymorph: string | null }[]>>(new Map());
+  /** The item being edited, or null for a new one. */
+  readonly item = input<ProposalItem | null>(null);
+  /** A catalogue species to start from (editing an add_value item that names one by id). */
+  readonly knownSpecies = input<SpeciesChoice | null>(null);
+  readonly save = output<ItemDraft>();
+  readonly cancel = output<void>();
+
+  protected readonly ids = { unit: `kx-unit-${nextFormId}`, kind: `kx-ukind-${nextFormId++}` };
+  protected readonly form = valueEntryForm();
+  protected readonly subject = signal<Subject | null>(null);
+  protected readonly source = signal<SourceChoice | null>(null);
+  /** The value this one revises (revise_value), or null for a new value. */
+  protected readonly revises = signal<string | null>(null);
+  protected readonly submitted = signal(false);
+
+  protected readonly quantities = QUANTITIES;
+  protected readonly transitions = TRANSITIONS;
+  protected readonly methods = METHODS;
+  protected readonly pressures = STANDARD_PRESSURES;
+
+  private readonly entry = toSignal(this.form.valueChanges.pipe(startWith(null)), { initialValue: null });
+  protected readonly quantity = computed(() => (this.entry(), this.form.controls.quantity.value));
+  protected readonly units = computed(() => unitsFor(this.quantity()));
+  protected readonly showTransition = computed(() => this.quantity() === 'dtrsH');
+  protected readonly expanded = computed(() => (this.entry(), this.form.controls.uncertaintyKind.value === 'expanded'));
+  protected readonly computedMethod = computed(() => (this.entry(), this.form.controls.method.value === 'computed'));
+  protected readonly editingRevision = computed(() => this.item()?.kind === 'revise_value');
+
+  private readonly record = catalogueRecord(computed(() => this.subject()?.species.id ?? null));
+  /** Values of the chosen species phase and quantity in the latest published release. */
+  protected readonly existing = computed(() => {
+    const record = this.record();
+    const subject = this.subject();
+    if (!record || !subject?.phase || subject.newPhase) {
+      return [];
+    }
+    const transition = this.form.controls.transitionKind.value;
+    const quantity = findPhase(record, subject.phase, subject.polymorph)?.quantities.find(
+      (q) => q.quantity === this.quantity() && (this.quantity() !== 'dtrsH' || q.transitionKind === transition),
+    );
+    return valuesOf(quantity).map((value, index) => ({ value, recommended: index === 0 && !!quantity?.recommended, shown: shown(value) }));
+  });
+  protected readonly release = computed(() => this.record()?.release ?? '');
+
+  ngOnInit(): void {
+    const item = this.item();
+    if (item) {
+      this.form.patchValue(entryFromPayload(item.payload, item.kind === 'revise_value' ? quantityFromUnit(String(item.payload['unit'] ?? '')) : undefined));
+      if (item.kind === 'revise_value') {
+        this.revises.set(String(item.payload['valueId'] ?? ''));
+      }
+      const known = [...this.proposed(), ...(this.knownSpecies() ? [this.knownSpecies()!] : [])];
+      this.subject.set(subjectOf(item.payload, known));
+      if (item.source) {
+        this.source.set({ id: item.source.id, shortKey: item.source.shortKey, title: item.source.title });
+      }
+    }
+    revalidateDependents(this.form);
+    this.form.controls.quantity.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe((quantity) => {
+      if (!unitsFor(quantity).includes(this.form.controls.unit.value)) {
+        this.form.controls.unit.setValue(unitsFor(quantity)[0]);
+      }
+      if (quantity !== 'dtrsH') {
+        this.form.controls.transitionKind.setValue(null);
+      }
+      this.revises.set(null);
+    });
+    this.form.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe(() => revalidateDependents(this.form));
+  }
+
+  protected message(field: keyof ValueEntry): string {
+    return valueEntryMessage(field, this.form.controls[field].errors, this.quantity());
+  }
+
+  protected chooseSubject(subject: Subject | null): void {
+    this.subject.set(subject);
+    this.revises.set(null);
+  }
+
+  protected saveValue(): void {
+    this.submitted.set(true);
+    revalidateDependents(this.form);
+    const subject = this.subject();
+    const needsSubject = !this.editingRevision();
+    if (this.form.invalid || !this.source() || (needsSubject && !subjectComplete(subject))) {
+      this.form.markAllAsTouched();
+      this.subjectPicker()?.touch();
+      this.sourcePicker()?.touch();
+      return;
+    }
+    const entry = this.form.getRawValue();
+    const revises = this.revises();
+    if (revises) {
+      this.save.emit({ kind: 'revise_value', payload: { valueId: revises, ...valuePayload(entry, { withQuantity: false }) }, sourceId: this.source()!.id, prerequisites: [] });
+      return;
+    }
+    const complete = subject as CompleteSubject;
+    this.save.emit({
+      kind: 'add_value',
+      payload: { ...subjectPayload(complete), ...valuePayload(entry, { withQuantity: true }) },
+      sourceId: this.source()!.id,
+      prerequisites: this.item() ? [] : prerequisitesFor(complete),
+    });
+  }
+}
+
+/** A value in the unit it is usually read in (kJ/mol, J/(mol·K)). */
+function shown(value: CatalogueValue): { value: number; uncertainty: number | null; unit: string } {
+  const main = convertFromSi(value.value, value.unit, 'kJ/mol');
+  const uncertainty = value.uncertainty === null ? null : convertFromSi(value.uncertainty, value.unit, 'kJ/mol').value;
+  return { value: main.value, uncertainty, unit: main.unit };
+}
+
+/** The quantity family a unit belongs to, for the rules of a revision whose quantity is the revised value's. */
+function quantityFromUnit(unit: string): QuantityCode {
+  return unitsFor('dfH').includes(unit) ? 'dfH' : 'S';
+}
+
