@@ -91,7 +91,7 @@ async function testEnvironment(tmp: string): Promise<NodeJS.ProcessEnv> {
 
 async function ensureChromium(): Promise<void> {
   if (commandExists('chromium')) return;
-  await aptInstall(['chromium'], 'Chromium for the browser tests (Debian package chromium)');
+  await aptInstall(['chromium', 'fonts-liberation'], 'Chromium for the browser tests (Debian packages chromium, fonts-liberation)');
 }
 
 async function jasmineSuite(suite: string, config: string, env: NodeJS.ProcessEnv, tmp: string): Promise<SuiteCount> {
