@@ -99,7 +99,8 @@ async function jasmineSuite(suite: string, config: string, env: NodeJS.ProcessEn
   heading(suite);
   const jasmineBin = path.resolve('node_modules/jasmine/bin/jasmine.js');
   try {
-    await run(process.execPath, ['--enable-source-maps', jasmineBin, `--config=${config}`], {
+    const filter = process.env.KELVINDEX_FILTER ? [`--filter=${process.env.KELVINDEX_FILTER}`] : [];
+    await run(process.execPath, ['--enable-source-maps', jasmineBin, `--config=${config}`, ...filter], {
       env: { ...env, KELVINDEX_COUNTS_FILE: countsFile, KELVINDEX_SUITE: suite },
     });
   } catch {

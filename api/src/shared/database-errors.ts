@@ -34,6 +34,8 @@ export function translateDatabaseError(error: unknown): HttpError | undefined {
       return new UnprocessableError(known?.message ?? `A value breaks a data rule${constraint}`, details);
     case '23502':
       return new UnprocessableError(known?.message ?? `A required value is missing${constraint}`, details);
+    case '22021':
+      return new UnprocessableError('A text contains a character the database cannot store (NUL or an invalid byte)');
     case '22P02':
     case '22003':
     case '22007':

@@ -6,6 +6,8 @@ export function queryText(req: Request, name: string): string | undefined {
   const value = req.query[name];
   if (value === undefined || value === '') return undefined;
   if (typeof value !== 'string') throw new BadRequestError(`${name} must be given once`);
+  // PostgreSQL text cannot hold NUL; say so here rather than fail in the database.
+  if (value.includes('\u0000')) throw new BadRequestError(`${name} must not contain a NUL character`);
   return value;
 }
 
