@@ -107,11 +107,21 @@ export async function focusedTarget(page: Page): Promise<KeyboardTarget> {
       getAttribute(name: string): string | null;
       labels?: { textContent: string | null }[] | null;
     };
-    const element = (globalThis as unknown as { document: { activeElement: Element | null } }).document.activeElement;
+    const document = (globalThis as unknown as { document: { activeElement: Element | null; getElementById(id: string): Element | null } }).document;
+    const element = document.activeElement;
     if (!element) {
       return { tag: '', role: '', name: '', classes: '', type: '' };
     }
-    const label = element.labels && element.labels.length > 0 ? element.labels[0].textContent : null;
+    const labelledBy = element.getAttribute('aria-labelledby');
+    const label =
+      element.labels && element.labels.length > 0
+        ? element.labels[0].textContent
+        : labelledBy
+          ? labelledBy
+              .split(/\s+/)
+              .map((id) => document.getElementById(id)?.textContent ?? '')
+              .join(' ')
+          : null;
     return {
       tag: element.tagName.toLowerCase(),
       role: element.getAttribute('role') ?? '',

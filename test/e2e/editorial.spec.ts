@@ -134,7 +134,9 @@ describe('editorial workflow (end to end)', () => {
     await page.getByRole('heading', { name: /asked for changes/ }).waitFor();
 
     const card = itemCard(page);
+    await card.getByRole('heading', { name: /ΔfH°\(l\) of propan-1-ol/ }).waitFor();
     await card.getByRole('button', { name: /^Edit ΔfH°/ }).click();
+    await card.getByRole('combobox', { name: 'Species', exact: true }).waitFor();
     await card.getByRole('textbox', { name: 'Uncertainty (optional)' }).fill('0.35');
     await card.getByRole('button', { name: 'Save changes' }).click();
     await card.getByText(/-302\.6 ± 0\.35 kJ\/mol/).waitFor();
@@ -185,12 +187,17 @@ describe('editorial workflow (end to end)', () => {
     const found = await apiGet<{ items: { id: string; name: string }[] }>('/species?q=propan-1-ol');
     const id = found.items.find((s) => s.name === 'propan-1-ol')!.id;
     const page = await pageAs(null, `/species/${id}?release=2027.1`);
+    // The recommended value leads the quantity's card; the older source stays as an alternative.
     const enthalpy = page.locator('.kx-value-card').filter({ hasText: 'ΔfH°' }).first();
-    await enthalpy.getByText(/-302\.60? ± 0\.35/).waitFor({ timeout: 15_000 });
-    expect(await enthalpy.textContent()).toContain(sourceKey);
+    await enthalpy.getByText(/^-302\.60? ± 0\.35$/).first().waitFor({ timeout: 15_000 });
+    expect(await enthalpy.locator('.kx-value-line').first().textContent()).toMatch(/recommended\s*-302\.60? ± 0\.35/);
+    expect(await enthalpy.textContent()).toContain(`invented demo report ${tag}`);
 
     await page.goto(`/species/${id}?release=2026.2`);
-    await page.locator('.kx-value-card').filter({ hasText: 'ΔfH°' }).first().getByText(/-302\.9 ± 0\.5/).waitFor({ timeout: 15_000 });
+    const before = page.locator('.kx-value-card').filter({ hasText: 'ΔfH°' }).first();
+    await before.getByText(/^-302\.9 ± 0\.5$/).first().waitFor({ timeout: 15_000 });
+    expect(await before.locator('.kx-value-line').first().textContent()).toMatch(/recommended\s*-302\.9 ± 0\.5/);
+    expect(await before.textContent()).not.toContain(`invented demo report ${tag}`);
   }, 60_000);
 
   it('the watcher’s e-mail about the release appears in the outbox', async () => {

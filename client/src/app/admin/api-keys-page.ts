@@ -29,7 +29,7 @@ import { AdminApi, ManagedApiKey } from './admin-api';
     } @else if (keys().length === 0) {
       <p class="kx-muted">No API keys{{ showRevoked() ? '' : ' in use' }}.</p>
     } @else {
-      <div class="kx-table-scroll">
+      <div class="kx-table-scroll" tabindex="0" role="region" aria-label="API keys">
         <table class="kx-admin-table">
           <caption class="kx-visually-hidden">API keys</caption>
           <thead>

@@ -1,4 +1,4 @@
-import { DatePipe, DecimalPipe } from '@angular/common';
+import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, DestroyRef, ElementRef, computed, inject, signal, viewChild } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
@@ -15,6 +15,8 @@ import { UploadProgress, UploadState, uploadStates } from '../shared/uploads/upl
 import { problemsCsv, problemsOfRefusal, reportFileName } from './import-report';
 import { ImportJob, ImportProblem, ImportReport, ImportsApi } from './imports-api';
 
+const COUNT_FORMAT = new Intl.NumberFormat();
+
 /** How often a running import is asked for its progress, ms. */
 export const POLL_INTERVAL_MS = 500;
 
@@ -27,7 +29,7 @@ type Phase = 'choose' | 'checking' | 'checked' | 'importing' | 'done' | 'failed'
  */
 @Component({
   selector: 'kx-import-page',
-  imports: [DatePipe, DecimalPipe, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, ReactiveFormsModule, RouterLink, UploadProgress],
+  imports: [DatePipe, MatButtonModule, MatFormFieldModule, MatInputModule, MatProgressBarModule, ReactiveFormsModule, RouterLink, UploadProgress],
   templateUrl: './import-page.html',
   styleUrl: './import-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -126,6 +128,11 @@ export class ImportPage {
           this.failure.set(state.message);
         }
       });
+  }
+
+  /** A count with thousands grouped, as the reader's language writes it. */
+  protected count(n: number | null | undefined): string {
+    return n === null || n === undefined ? '—' : COUNT_FORMAT.format(n);
   }
 
   protected downloadProblems(): void {

@@ -1,7 +1,7 @@
 import { AbstractControl, FormArray, FormControl, FormGroup, ValidationErrors, ValidatorFn, Validators } from '@angular/forms';
 
 import { COEFFICIENT_COUNTS, FitForm, StandardPressure, ValueMethod } from '../shared/vocabulary/thermo-vocabulary';
-import { FitRangeInput } from './heat-capacity';
+import { FitRangeInput } from '../shared/heat-capacity/heat-capacity';
 import { levelOfTheoryRule, readDecimal } from './value-entry-rules';
 
 /**

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, computed, inject, input, output, signal, viewChild } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, computed, effect, inject, input, output, signal, untracked, viewChild } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -12,10 +12,10 @@ import { ProposalItem } from '../shared/proposals/proposal';
 import { COEFFICIENT_COUNTS, FIT_FORMS, METHODS, STANDARD_PRESSURES } from '../shared/vocabulary/thermo-vocabulary';
 import { catalogueRecord } from './catalogue-record';
 import { FitEntryForm, fitEntryForm, fitEntryFromPayload, fitPayload, fitRangeForm, fitRanges, revalidateFit } from './fit-entry-rules';
-import { FitPlot } from './fit-plot';
+import { FitPlot } from '../shared/heat-capacity/fit-plot';
 import { ItemDraft, prerequisitesFor } from './item-draft';
 import { SourceChoice, SourcePicker } from '../shared/sources/source-picker';
-import { CompleteSubject, SpeciesChoice, Subject, subjectComplete, subjectOf, subjectPayload } from './subject';
+import { SpeciesChoice, Subject, subjectComplete, subjectFieldsOf, subjectOf, subjectPayload } from './subject';
 import { SubjectPicker } from './subject-picker';
 
 /**
@@ -71,6 +71,17 @@ export class FitItemForm implements OnInit {
   });
   protected readonly existingFits = computed(() => this.existingPhase()?.fits ?? []);
 
+  constructor() {
+    // Editing an item about a catalogue species: its record may arrive after the form opens.
+    effect(() => {
+      const item = this.item();
+      const known = this.knownSpecies();
+      if (item && known && untracked(() => this.subject()) === null) {
+        this.subject.set(subjectOf(item.payload, [known]));
+      }
+    });
+  }
+
   ngOnInit(): void {
     const item = this.item();
     if (item) {
@@ -122,7 +133,8 @@ export class FitItemForm implements OnInit {
     revalidateFit(this.form);
     const subject = this.subject();
     const replaces = this.replaces();
-    if (this.form.invalid || !this.source() || (!replaces && !subjectComplete(subject))) {
+    const original = this.item() ? subjectFieldsOf(this.item()!.payload) : null;
+    if (this.form.invalid || !this.source() || (!replaces && !(original && subject === null) && !subjectComplete(subject))) {
       this.form.markAllAsTouched();
       this.subjectPicker()?.touch();
       this.sourcePicker()?.touch();
@@ -133,12 +145,12 @@ export class FitItemForm implements OnInit {
       this.save.emit({ kind: 'replace_fit', payload: { fitId: replaces, ...payload }, sourceId: this.source()!.id, prerequisites: [] });
       return;
     }
-    const complete = subject as CompleteSubject;
+    const complete = subjectComplete(subject) ? subject : null;
     this.save.emit({
       kind: 'add_fit',
-      payload: { ...subjectPayload(complete), ...payload },
+      payload: { ...(complete ? subjectPayload(complete) : original), ...payload },
       sourceId: this.source()!.id,
-      prerequisites: this.item() ? [] : prerequisitesFor(complete),
+      prerequisites: this.item() || !complete ? [] : prerequisitesFor(complete),
     });
   }
 }

@@ -1,8 +1,10 @@
+import { BreakpointObserver } from '@angular/cdk/layout';
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, linkedSignal, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
 import { MatDialog } from '@angular/material/dialog';
+import { toSignal } from '@angular/core/rxjs-interop';
 import { RouterLink } from '@angular/router';
 import { Observable, catchError, concatMap, filter, forkJoin, from, last, map, of } from 'rxjs';
 
@@ -76,6 +78,10 @@ export class ProposalEditor {
   private readonly catalogueSpecies = signal<ReadonlyMap<string, SpeciesChoice>>(new Map());
 
   protected readonly decisionLabels = DECISION_LABELS;
+  /** On a phone the kinds of item stack, so that none is cut off. */
+  protected readonly narrow = toSignal(inject(BreakpointObserver).observe('(max-width: 599.98px)').pipe(map((state) => state.matches)), {
+    initialValue: false,
+  });
   protected readonly viewer = computed(() => ({
     isAuthor: this.current().author.id === String(this.auth.user()?.id ?? ''),
     roles: this.auth.user()?.roles ?? [],

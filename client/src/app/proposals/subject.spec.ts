@@ -1,4 +1,4 @@
-import { proposedPhases, proposedSpecies, subjectOf, subjectPayload } from './subject';
+import { proposedPhases, proposedSpecies, subjectFieldsOf, subjectOf, subjectPayload } from './subject';
 
 describe('subjects', () => {
   const items = [
@@ -25,5 +25,9 @@ describe('subjects', () => {
     const known = proposedSpecies(items);
     expect(subjectOf({ species: 'butan-1-ol', phase: 'l' }, known)?.species.name).toBe('butan-1-ol');
     expect(subjectOf({ speciesId: 'unknown', phase: 'l' }, known)).toBeNull();
+  });
+
+  it('keeps the subject fields of a stored payload for an edit that leaves them alone', () => {
+    expect(subjectFieldsOf({ speciesId: 's1', phase: 'cr', polymorph: 'graphite', value: '1', unit: 'kJ/mol' })).toEqual({ speciesId: 's1', phase: 'cr', polymorph: 'graphite' });
   });
 });

@@ -71,3 +71,14 @@ export type CompleteSubject = Subject & { readonly phase: PhaseCode };
 export function subjectComplete(subject: Subject | null): subject is CompleteSubject {
   return !!subject && !!subject.phase;
 }
+
+/** The fields naming the subject in a stored payload (kept as they are when an edit leaves the subject alone). */
+export function subjectFieldsOf(payload: Readonly<Record<string, unknown>>): Record<string, unknown> {
+  const fields: Record<string, unknown> = {};
+  for (const key of ['speciesPhaseId', 'speciesId', 'species', 'phase', 'polymorph']) {
+    if (payload[key] !== undefined) {
+      fields[key] = payload[key];
+    }
+  }
+  return fields;
+}

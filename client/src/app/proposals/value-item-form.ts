@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, computed, inject, input, output, signal, viewChild } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, computed, effect, inject, input, output, signal, untracked, viewChild } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -24,7 +24,7 @@ import {
 import { catalogueRecord } from './catalogue-record';
 import { ItemDraft, prerequisitesFor } from './item-draft';
 import { SourceChoice, SourcePicker } from '../shared/sources/source-picker';
-import { CompleteSubject, SpeciesChoice, Subject, subjectComplete, subjectOf, subjectPayload } from './subject';
+import { SpeciesChoice, Subject, subjectComplete, subjectFieldsOf, subjectOf, subjectPayload } from './subject';
 import { SubjectPicker } from './subject-picker';
 import { ValueEntry, entryFromPayload, revalidateDependents, valueEntryForm, valueEntryMessage, valuePayload } from './value-entry-rules';
 
@@ -105,6 +105,17 @@ export class ValueItemForm implements OnInit {
   });
   protected readonly release = computed(() => this.record()?.release ?? '');
 
+  constructor() {
+    // Editing an item about a catalogue species: its record may arrive after the form opens.
+    effect(() => {
+      const item = this.item();
+      const known = this.knownSpecies();
+      if (item && known && untracked(() => this.subject()) === null) {
+        this.subject.set(subjectOf(item.payload, [known]));
+      }
+    });
+  }
+
   ngOnInit(): void {
     const item = this.item();
     if (item) {
@@ -144,7 +155,8 @@ export class ValueItemForm implements OnInit {
     this.submitted.set(true);
     revalidateDependents(this.form);
     const subject = this.subject();
-    const needsSubject = !this.editingRevision();
+    const original = this.item() ? subjectFieldsOf(this.item()!.payload) : null;
+    const needsSubject = !this.editingRevision() && !(original && subject === null);
     if (this.form.invalid || !this.source() || (needsSubject && !subjectComplete(subject))) {
       this.form.markAllAsTouched();
       this.subjectPicker()?.touch();
@@ -157,12 +169,12 @@ export class ValueItemForm implements OnInit {
       this.save.emit({ kind: 'revise_value', payload: { valueId: revises, ...valuePayload(entry, { withQuantity: false }) }, sourceId: this.source()!.id, prerequisites: [] });
       return;
     }
-    const complete = subject as CompleteSubject;
+    const complete = subjectComplete(subject) ? subject : null;
     this.save.emit({
       kind: 'add_value',
-      payload: { ...subjectPayload(complete), ...valuePayload(entry, { withQuantity: true }) },
+      payload: { ...(complete ? subjectPayload(complete) : original), ...valuePayload(entry, { withQuantity: true }) },
       sourceId: this.source()!.id,
-      prerequisites: this.item() ? [] : prerequisitesFor(complete),
+      prerequisites: this.item() || !complete ? [] : prerequisitesFor(complete),
     });
   }
 }

@@ -47,7 +47,7 @@ export function kilojoules(joules: number | null, signed = false): string {
           @if (item.savedReactions.length === 0) {
             <p class="kx-muted">No saved reaction uses this species phase.</p>
           } @else {
-            <div class="kx-table-scroll">
+            <div class="kx-table-scroll" tabindex="0" role="region" [attr.aria-label]="'Saved reactions using ' + item.species.name">
               <table class="kx-impact-table">
                 <caption class="kx-visually-hidden">Saved reactions using {{ item.species.name }}, at {{ temperature() }} K, kJ/mol</caption>
                 <thead>

@@ -4,7 +4,9 @@ import { RouterLink } from '@angular/router';
 import { catchError, forkJoin, of } from 'rxjs';
 
 import { AuthService } from '../core/auth';
-import { CatalogueApi, CatalogueSpecies } from '../shared/catalogue/catalogue-api';
+import { CatalogueApi, CataloguePhase, CatalogueSpecies, findPhase } from '../shared/catalogue/catalogue-api';
+import { FitPlot } from '../shared/heat-capacity/fit-plot';
+import { FitRangeInput } from '../shared/heat-capacity/heat-capacity';
 import { CheckList } from '../shared/proposals/check-list';
 import { CommentThread } from '../shared/proposals/comment-thread';
 import { EvidenceList } from '../shared/proposals/evidence-list';
@@ -16,7 +18,7 @@ import { ProposalStateBadge } from '../shared/proposals/proposal-state-badge';
 import { ProposalsApi } from '../shared/proposals/proposals-api';
 import { Quantity } from '../shared/quantity/quantity';
 import { convertFromSi } from '../shared/unit-selector/molar-energy-unit';
-import { METHODS } from '../shared/vocabulary/thermo-vocabulary';
+import { FitForm, METHODS } from '../shared/vocabulary/thermo-vocabulary';
 import { currentValueFor, speciesIdOf } from './current-value';
 import { ImpactPanel } from './impact-panel';
 import { ReviewDecision } from './review-decision';
@@ -29,7 +31,7 @@ import { ReviewDecision } from './review-decision';
  */
 @Component({
   selector: 'kx-review-page',
-  imports: [CheckList, CommentThread, DatePipe, EvidenceList, ImpactPanel, ProposalStateBadge, Quantity, ReviewDecision, RouterLink],
+  imports: [CheckList, CommentThread, DatePipe, EvidenceList, FitPlot, ImpactPanel, ProposalStateBadge, Quantity, ReviewDecision, RouterLink],
   templateUrl: './review-page.html',
   styleUrl: './review-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -64,7 +66,8 @@ export class ReviewPage {
     const names = new Map([...records.values()].map((r) => [r.id, r.name]));
     return this.current().items.map((item) => {
       const speciesId = speciesIdOf(item);
-      const current = currentValueFor(item, speciesId ? records.get(speciesId) ?? null : null);
+      const record = speciesId ? records.get(speciesId) ?? null : null;
+      const current = currentValueFor(item, record);
       const description = describeItem(item, names);
       return {
         item,
@@ -81,6 +84,7 @@ export class ReviewPage {
         proposedUncertainty: uncertaintyText(item.payload),
         proposedConditions: `${text(item.payload['temperatureK']) || '298.15'} K, ${item.payload['pressurePa'] === 101325 ? '1 atm' : '1 bar'}`,
         retireReason: text(item.payload['reason']),
+        fit: item.kind === 'add_fit' || item.kind === 'replace_fit' ? fitToPlot(item.payload, record) : null,
       };
     });
   });
@@ -143,4 +147,16 @@ function methodText(payload: Readonly<Record<string, unknown>>): string {
 
 function text(value: unknown): string {
   return typeof value === 'string' || typeof value === 'number' ? String(value) : '';
+}
+
+/** A proposed fit with the catalogue's data for its species phase, to plot side by side. */
+function fitToPlot(payload: Readonly<Record<string, unknown>>, record: CatalogueSpecies | null): { form: FitForm; ranges: FitRangeInput[]; existing: CataloguePhase | null } {
+  const ranges = Array.isArray(payload['ranges']) ? (payload['ranges'] as FitRangeInput[]) : [];
+  let existing: CataloguePhase | null = null;
+  if (record && typeof payload['phase'] === 'string') {
+    existing = findPhase(record, payload['phase'], (payload['polymorph'] as string | undefined) ?? null) ?? null;
+  } else if (record && typeof payload['fitId'] === 'string') {
+    existing = record.phases.find((phase) => phase.fits.some((fit) => fit.id === payload['fitId'])) ?? null;
+  }
+  return { form: (payload['form'] as FitForm | undefined) ?? 'shomate', ranges, existing };
 }

@@ -1,4 +1,4 @@
-import { FitForm } from '../shared/vocabulary/thermo-vocabulary';
+import { FitForm } from '../vocabulary/thermo-vocabulary';
 
 /** Molar gas constant, J/(mol·K) (CODATA 2018, exact since the 2019 SI). */
 export const GAS_CONSTANT = 8.314462618;

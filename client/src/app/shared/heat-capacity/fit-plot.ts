@@ -1,9 +1,9 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 
-import { CataloguePhase } from '../shared/catalogue/catalogue-api';
-import { LineChart } from '../shared/line-chart/line-chart';
-import { ChartSeries } from '../shared/line-chart/line-chart-data';
-import { FitForm } from '../shared/vocabulary/thermo-vocabulary';
+import { CataloguePhase } from '../catalogue/catalogue-api';
+import { LineChart } from '../line-chart/line-chart';
+import { ChartSeries } from '../line-chart/line-chart-data';
+import { FitForm } from '../vocabulary/thermo-vocabulary';
 import { FitRangeInput, heatCapacityCurve } from './heat-capacity';
 
 /** The series to plot: the fit being entered, the phase's fits in the catalogue and its Cp° values. */

@@ -1,4 +1,4 @@
-import { CataloguePhase } from '../shared/catalogue/catalogue-api';
+import { CataloguePhase } from '../catalogue/catalogue-api';
 import { fitPlotSeries } from './fit-plot';
 
 describe('fitPlotSeries', () => {
