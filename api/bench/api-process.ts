@@ -19,7 +19,7 @@ export interface ApiProcess {
 
 const root = path.resolve(__dirname, '../../../..');
 
-export async function startApi(databaseUrl: string, options: { captureFile?: string } = {}): Promise<ApiProcess> {
+export async function startApi(databaseUrl: string, options: { captureFile?: string; env?: NodeJS.ProcessEnv } = {}): Promise<ApiProcess> {
   const port = await anyFreePort();
   const scratch = mkdtempSync(path.join(os.tmpdir(), 'kelvindex-bench-api-'));
   const env: NodeJS.ProcessEnv = {
@@ -35,6 +35,7 @@ export async function startApi(databaseUrl: string, options: { captureFile?: str
     // No mail or evidence files are sent during the benchmark; these only keep the defaults off npm start's fakes.
     SMTP_PORT: '9',
     S3_ENDPOINT: 'http://127.0.0.1:9',
+    ...options.env,
   };
   const args = [path.join(root, 'dist/server/api/src/main.js')];
   if (options.captureFile) {

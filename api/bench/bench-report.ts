@@ -46,7 +46,7 @@ const num = (n: number | undefined | null, digits = 1) => (n === undefined || n 
 
 export function printTable(results: BenchResults): void {
   const header = ['benchmark', 'conn', 'API req/s', 'p50 ms', 'p95 ms', 'p99 ms', 'errors', 'RSS MB', 'PG req/s', 'PG p95', 'API/PG'];
-  const widths = [40, 5, 10, 8, 8, 8, 7, 8, 10, 8, 7];
+  const widths = [50, 5, 10, 8, 8, 8, 7, 8, 10, 8, 7];
   const line = (cells: string[]) => console.log(cells.map((c, i) => (i === 0 ? pad(c, widths[i]) : left(c, widths[i]))).join(' '));
   console.log('');
   line(header);
@@ -102,23 +102,29 @@ export function writeResults(results: BenchResults, projectDir: string): string 
 export function checkTargets(results: Omit<BenchResults, 'targets'>): TargetCheck[] {
   const at16 = (key: string) => results.scenarios.find((s) => s.key === key && s.connections === 16 && s.available && s.api);
   const checks: TargetCheck[] = [];
-  const formula = at16('search-formula');
-  checks.push({
-    target: 'search by formula: p95 ≤ 20 ms at 16 connections',
-    measured: formula?.api ? `p95 ${formula.api.p95} ms` : 'not measured',
-    pass: formula?.api ? formula.api.p95 <= 20 && formula.api.errors === 0 : null,
-  });
-  checks.push({
-    target: 'search by formula: ≥ 1 000 req/s at 16 connections',
-    measured: formula?.api ? `${formula.api.requestsPerSecond} req/s` : 'not measured',
-    pass: formula?.api ? formula.api.requestsPerSecond >= 1000 : null,
-  });
-  const properties = at16('properties');
-  checks.push({
-    target: 'properties at 10 T: p95 ≤ 25 ms at 16 connections',
-    measured: properties?.api ? `p95 ${properties.api.p95} ms` : 'not measured',
-    pass: properties?.api ? properties.api.p95 <= 25 && properties.api.errors === 0 : null,
-  });
+  // The targets hold for the API as it runs (answer cache on); the same figures with the cache
+  // off are checked too, so that the table shows what a first request costs.
+  for (const [suffix, note] of [['', ''], [':uncached', ', answer cache off']]) {
+    const formula = at16(`search-formula${suffix}`);
+    if (suffix && !formula) continue;
+    checks.push({
+      target: `search by formula: p95 ≤ 20 ms at 16 connections${note}`,
+      measured: formula?.api ? `p95 ${formula.api.p95} ms` : 'not measured',
+      pass: formula?.api ? formula.api.p95 <= 20 && formula.api.errors === 0 : null,
+    });
+    checks.push({
+      target: `search by formula: ≥ 1 000 req/s at 16 connections${note}`,
+      measured: formula?.api ? `${formula.api.requestsPerSecond} req/s` : 'not measured',
+      pass: formula?.api ? formula.api.requestsPerSecond >= 1000 : null,
+    });
+    const properties = at16(`properties${suffix}`);
+    if (suffix && !properties) continue;
+    checks.push({
+      target: `properties at 10 T: p95 ≤ 25 ms at 16 connections${note}`,
+      measured: properties?.api ? `p95 ${properties.api.p95} ms` : 'not measured',
+      pass: properties?.api ? properties.api.p95 <= 25 && properties.api.errors === 0 : null,
+    });
+  }
   const ex = results.fullExport;
   if ('api' in ex && ex.copy && ex.ratio !== null) {
     checks.push({

@@ -36,6 +36,9 @@ const SECONDS = Number(process.env.KELVINDEX_BENCH_SECONDS ?? 10);
 const IMPORT_ROWS = Number(process.env.KELVINDEX_BENCH_IMPORT_ROWS ?? 50_000);
 const ONLY = process.env.KELVINDEX_BENCH_ONLY?.split(',').map((s) => s.trim()).filter(Boolean);
 const CONNECTIONS = [1, 16];
+/** benchmarks whose answers the API keeps in its answer cache (published release, GET) */
+const CACHED_READS = ['search-formula', 'search-name', 'search-elements', 'properties'];
+const UNCACHED_SUFFIX = ':uncached';
 /** requests per benchmark sent once for calibration, and kept in the rotation when they succeed */
 const CALIBRATION_REQUESTS = 200;
 
@@ -144,9 +147,9 @@ async function main(): Promise<void> {
     console.log(`\nMeasuring (${SECONDS} s per run, connections ${CONNECTIONS.join(' and ')}; API process NODE_ENV=production)…`);
     api = await startApi(bench.url);
     const rows: ScenarioRow[] = [];
-    for (const c of calibrated) {
+    const measure = async (c: Calibrated, variant: { key: string; title: string }, api: ApiProcess) => {
       for (const connections of CONNECTIONS) {
-        const row: ScenarioRow = { key: c.scenario.key, title: c.scenario.title, connections, available: c.requests.length > 0 };
+        const row: ScenarioRow = { key: variant.key, title: variant.title, connections, available: c.requests.length > 0 };
         if (!row.available) {
           row.reason = c.sampleFailure ?? 'no request to send';
           rows.push(row);
@@ -166,8 +169,19 @@ async function main(): Promise<void> {
           statementsPerRequest: round(c.captured.reduce((a, r) => a + r.length, 0) / c.captured.length, 1),
         });
         rows.push(row);
-        console.log(`  ${c.scenario.key.padEnd(16)} ${String(connections).padStart(2)} conn: API ${apiStats.requestsPerSecond} req/s p95 ${apiStats.p95} ms (${apiStats.errors} errors); PG ${database.requestsPerSecond} req/s p95 ${database.p95} ms`);
+        console.log(`  ${variant.key.padEnd(22)} ${String(connections).padStart(2)} conn: API ${apiStats.requestsPerSecond} req/s p95 ${apiStats.p95} ms (${apiStats.errors} errors); PG ${database.requestsPerSecond} req/s p95 ${database.p95} ms`);
       }
+    };
+    for (const c of calibrated) await measure(c, c.scenario, api);
+    // The answer cache serves repeated reads of a published release from memory; the same reads
+    // with it turned off show what every first request (and a release in preparation) costs.
+    const cacheable = calibrated.filter((c) => CACHED_READS.includes(c.scenario.key));
+    if (cacheable.length > 0) {
+      await api.stop();
+      console.log('  …the same reads again with the answer cache off (RESPONSE_CACHE_MB=0):');
+      const uncached = await startApi(bench.url, { env: { RESPONSE_CACHE_MB: '0' } });
+      api = uncached;
+      for (const c of cacheable) await measure(c, { key: `${c.scenario.key}${UNCACHED_SUFFIX}`, title: `${c.scenario.title}, cache off` }, uncached);
     }
 
     let fullExport: BenchResults['fullExport'] = { available: false, reason: 'not run (KELVINDEX_BENCH_ONLY)' };

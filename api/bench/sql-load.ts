@@ -3,6 +3,8 @@ import { loadStats, type LoadStats } from './latency-stats';
 
 /** An SQL statement the API sent for one request, as captured (statement-capture.ts). */
 export interface CapturedStatement {
+  /** the prepared statement's name when the API sent it as a named prepared statement */
+  name?: string;
   text: string;
   values: unknown[];
   /** read through a cursor (pg-query-stream) by the API */
@@ -15,7 +17,8 @@ export type CapturedRequest = CapturedStatement[];
 /**
  * PostgreSQL doing the same work as the API, directly: `connections` clients, each replaying
  * captured requests (all statements of one request, in order, on its own connection) in a loop
- * for `seconds`. Same driver (pg), same statements and parameters, no HTTP, no JSON, no engine.
+ * for `seconds`. Same driver (pg), same statements and parameters (prepared where the API
+ * prepares them), no HTTP, no JSON, no engine.
  * Returns the stats and the mean time of each statement position (to see which one dominates).
  */
 export async function sqlLoad(url: string, requests: CapturedRequest[], connections: number, seconds: number): Promise<LoadStats & { statementMeanMs: number[] }> {
@@ -39,7 +42,8 @@ export async function sqlLoad(url: string, requests: CapturedRequest[], connecti
         try {
           for (let i = 0; i < request.length; i++) {
             const s0 = performance.now();
-            await client.query(request[i].text, request[i].values);
+            const { name, text, values } = request[i];
+            await client.query({ name, text, values });
             statementTotals[i] = (statementTotals[i] ?? 0) + performance.now() - s0;
             statementCounts[i] = (statementCounts[i] ?? 0) + 1;
           }

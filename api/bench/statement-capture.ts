@@ -8,6 +8,7 @@
 import { appendFileSync } from 'node:fs';
 
 interface Submitted {
+  name?: string;
   text?: string;
   values?: unknown[];
   cursor?: { text?: string; values?: unknown[] };
@@ -32,7 +33,8 @@ if (file) {
       params = submitted.values ?? submitted.cursor?.values;
     }
     if (text && !/\bpgboss\b/i.test(text)) {
-      appendFileSync(file, `${JSON.stringify({ text, values: params ?? [], stream: Boolean((config as Submitted)?.cursor) })}\n`);
+      const name = typeof config === 'object' ? (config as Submitted | null)?.name : undefined;
+      appendFileSync(file, `${JSON.stringify({ name, text, values: params ?? [], stream: Boolean((config as Submitted)?.cursor) })}\n`);
     }
     return original.apply(this, args);
   };

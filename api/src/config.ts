@@ -14,6 +14,8 @@ export interface AppConfig {
   clientDir: string;
   appUrl: string;
   uploadLimitBytes: number;
+  /** memory for answers computed from published releases (they never change); 0 turns it off */
+  responseCacheMb: number;
 }
 
 function int(env: NodeJS.ProcessEnv, name: string, fallback: number): number {
@@ -52,5 +54,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     clientDir: env.CLIENT_DIR ?? 'dist/client/browser',
     appUrl: env.APP_URL ?? `http://${host}:${port}`,
     uploadLimitBytes: int(env, 'UPLOAD_LIMIT_BYTES', 20 * 1024 * 1024),
+    responseCacheMb: Math.max(0, int(env, 'RESPONSE_CACHE_MB', 64)),
   };
 }

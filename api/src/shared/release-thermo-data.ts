@@ -95,10 +95,11 @@ interface RecordRow {
   phase: PhaseCode;
   polymorph: string | null;
   isReferenceState: boolean;
+  values: ValueRow[];
+  fits: RecommendedFit[] | null;
 }
 
 interface ValueRow {
-  speciesPhaseId: string;
   quantity: 'dfH' | 'S' | 'Cp' | 'dfG';
   id: string;
   valueSi: number;
@@ -109,10 +110,6 @@ interface ValueRow {
   pressurePa: number;
   sourceId: string;
   sourceKey: string;
-}
-
-interface FitRow extends RecommendedFit {
-  speciesPhaseId: string;
 }
 
 /** A fit row never changes (fits are append-only), so its engine function is built once. */
@@ -126,60 +123,67 @@ export function standardUncertainty(uncertainty: number | null, kind: Uncertaint
 }
 
 /**
- * The species phases `speciesPhaseIds` with their recommended data in release `releaseId`
- * (three indexed queries, whatever the number of phases).
+ * One statement for species phases and their recommended data in release $1: the phases matched
+ * by `where` (on `sp`), each with its recommended values and fit as JSON. PostgreSQL prints a
+ * double precision in JSON with the shortest text that reads back to the same number, so the
+ * values arrive exactly as stored.
  */
-export async function loadPhaseThermo(manager: EntityManager, releaseId: string, speciesPhaseIds: string[]): Promise<Map<string, PhaseThermoRecord>> {
+function phaseThermoSql(where: string): string {
+  return `SELECT sp.id AS "speciesPhaseId", s.id AS "speciesId", s.formula, s.hill_formula AS "hillFormula", s.name, s.charge,
+            s.composition, sp.phase, sp.polymorph, sp.is_reference_state AS "isReferenceState",
+            (SELECT coalesce(json_agg(json_build_object('quantity', v.quantity, 'id', v.id, 'valueSi', v.value_si,
+                      'uncertaintySi', v.uncertainty_si, 'uncertaintyKind', v.uncertainty_kind, 'coverageFactor', v.coverage_factor,
+                      'temperatureK', v.temperature_k, 'pressurePa', v.pressure_pa, 'sourceId', src.id, 'sourceKey', src.short_key)), '[]')
+               FROM release_members m
+               JOIN thermo_values v ON v.id = m.value_id
+               ${citedSourceJoin('v.source_id')}
+              WHERE m.release_id = $1 AND m.species_phase_id = sp.id AND m.is_recommended
+                AND m.member_kind = 'value' AND m.quantity IN ('dfH', 'S', 'Cp', 'dfG')) AS values,
+            (SELECT json_agg(json_build_object('id', f.id, 'form', f.form, 'tMin', f.t_min_k, 'tMax', f.t_max_k, 'ranges', f.ranges,
+                      'pressurePa', f.pressure_pa, 'sourceId', src.id, 'sourceKey', src.short_key))
+               FROM release_members m
+               JOIN heat_capacity_fits f ON f.id = m.fit_id
+               ${citedSourceJoin('f.source_id')}
+              WHERE m.release_id = $1 AND m.species_phase_id = sp.id AND m.is_recommended AND m.member_kind = 'fit') AS fits
+       FROM species_phases sp JOIN species s ON s.id = sp.species_id
+      WHERE ${where}`;
+}
+
+const PHASES_BY_ID = phaseThermoSql('sp.id = ANY($2::uuid[])');
+const PHASES_OF_SPECIES = phaseThermoSql(
+  'sp.species_id = $2 AND EXISTS (SELECT 1 FROM release_members h WHERE h.release_id = $1 AND h.species_phase_id = sp.id)',
+);
+
+function toRecords(rows: RecordRow[]): Map<string, PhaseThermoRecord> {
   const records = new Map<string, PhaseThermoRecord>();
-  if (speciesPhaseIds.length === 0) return records;
-  const [phases, values, fits] = await Promise.all([
-    manager.query(
-      `SELECT sp.id AS "speciesPhaseId", s.id AS "speciesId", s.formula, s.hill_formula AS "hillFormula", s.name, s.charge,
-              s.composition, sp.phase, sp.polymorph, sp.is_reference_state AS "isReferenceState"
-         FROM species_phases sp JOIN species s ON s.id = sp.species_id
-        WHERE sp.id = ANY($1::uuid[])`,
-      [speciesPhaseIds],
-    ) as Promise<RecordRow[]>,
-    manager.query(
-      `SELECT m.species_phase_id AS "speciesPhaseId", v.quantity, v.id, v.value_si AS "valueSi", v.uncertainty_si AS "uncertaintySi",
-              v.uncertainty_kind AS "uncertaintyKind", v.coverage_factor AS "coverageFactor", v.temperature_k AS "temperatureK",
-              v.pressure_pa AS "pressurePa", src.id AS "sourceId", src.short_key AS "sourceKey"
-         FROM release_members m
-         JOIN thermo_values v ON v.id = m.value_id
-         ${citedSourceJoin('v.source_id')}
-        WHERE m.release_id = $1 AND m.species_phase_id = ANY($2::uuid[]) AND m.is_recommended
-          AND m.member_kind = 'value' AND m.quantity IN ('dfH', 'S', 'Cp', 'dfG')`,
-      [releaseId, speciesPhaseIds],
-    ) as Promise<ValueRow[]>,
-    manager.query(
-      `SELECT m.species_phase_id AS "speciesPhaseId", f.id, f.form, f.t_min_k AS "tMin", f.t_max_k AS "tMax", f.ranges,
-              f.pressure_pa AS "pressurePa", src.id AS "sourceId", src.short_key AS "sourceKey"
-         FROM release_members m
-         JOIN heat_capacity_fits f ON f.id = m.fit_id
-         ${citedSourceJoin('f.source_id')}
-        WHERE m.release_id = $1 AND m.species_phase_id = ANY($2::uuid[]) AND m.is_recommended AND m.member_kind = 'fit'`,
-      [releaseId, speciesPhaseIds],
-    ) as Promise<FitRow[]>,
-  ]);
-  for (const p of phases) records.set(p.speciesPhaseId, { ...p });
-  for (const v of values) {
-    const record = records.get(v.speciesPhaseId);
-    if (!record) continue;
-    record[v.quantity] = {
-      id: v.id,
-      valueSi: v.valueSi,
-      standardUncertainty: standardUncertainty(v.uncertaintySi, v.uncertaintyKind, v.coverageFactor),
-      temperatureK: v.temperatureK,
-      pressurePa: v.pressurePa,
-      sourceId: v.sourceId,
-      sourceKey: v.sourceKey,
-    };
-  }
-  for (const { speciesPhaseId, ...fit } of fits) {
-    const record = records.get(speciesPhaseId);
-    if (record) record.fit = fit;
+  for (const { values, fits, ...phase } of rows) {
+    const record: PhaseThermoRecord = { ...phase };
+    for (const v of values) {
+      record[v.quantity] = {
+        id: v.id,
+        valueSi: v.valueSi,
+        standardUncertainty: standardUncertainty(v.uncertaintySi, v.uncertaintyKind, v.coverageFactor),
+        temperatureK: v.temperatureK,
+        pressurePa: v.pressurePa,
+        sourceId: v.sourceId,
+        sourceKey: v.sourceKey,
+      };
+    }
+    if (fits?.length) record.fit = fits[0];
+    records.set(record.speciesPhaseId, record);
   }
   return records;
+}
+
+/** The species phases `speciesPhaseIds` with their recommended data in release `releaseId` (one statement). */
+export async function loadPhaseThermo(manager: EntityManager, releaseId: string, speciesPhaseIds: string[]): Promise<Map<string, PhaseThermoRecord>> {
+  if (speciesPhaseIds.length === 0) return new Map();
+  return toRecords(await manager.query(PHASES_BY_ID, [releaseId, speciesPhaseIds]));
+}
+
+/** Every phase of a species that holds data in release `releaseId`, with its recommended data (one statement). */
+export async function loadSpeciesThermo(manager: EntityManager, releaseId: string, speciesId: string): Promise<Map<string, PhaseThermoRecord>> {
+  return toRecords(await manager.query(PHASES_OF_SPECIES, [releaseId, speciesId]));
 }
 
 /** "H2O(g)", "C(cr, graphite)": the formula as entered and the IUPAC phase label. */

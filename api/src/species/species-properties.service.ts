@@ -12,9 +12,10 @@ import { BadRequestError, NotFoundError, UnprocessableError } from '../shared/er
 import {
   computable,
   elementReferences,
-  loadPhaseThermo,
+  loadSpeciesThermo,
   speciesLabel,
   type ComputableSpecies,
+  type PhaseThermoRecord,
   type ReferenceRecords,
 } from '../shared/release-thermo-data';
 import { phaseLabel, type PhaseCode } from './phase-code';
@@ -75,9 +76,8 @@ export class SpeciesPropertiesService {
   constructor(private readonly dataSource: DataSource) {}
 
   async table(release: ResolvedRelease, request: PropertyRequest): Promise<PropertyTable> {
-    const phaseId = await this.choosePhase(release, request);
-    const records = await loadPhaseThermo(this.dataSource.manager, release.id, [phaseId]);
-    const record = records.get(phaseId)!;
+    const record = await this.choosePhase(release, request);
+    const phaseId = record.speciesPhaseId;
     const references = await elementReferences(this.dataSource.manager, release);
     const sameAsReference = [...references.values()].find((r) => r.record.speciesPhaseId === phaseId);
     const species = sameAsReference ?? computable(record);
@@ -146,13 +146,10 @@ export class SpeciesPropertiesService {
     };
   }
 
-  /** The species phase asked for, among those holding data in the release. */
-  private async choosePhase(release: ResolvedRelease, request: PropertyRequest): Promise<string> {
-    const phases: { id: string; phase: PhaseCode; polymorph: string | null }[] = await this.dataSource.query(
-      `SELECT sp.id, sp.phase, sp.polymorph FROM species_phases sp
-        WHERE sp.species_id = $2 AND EXISTS (SELECT 1 FROM release_members m WHERE m.release_id = $1 AND m.species_phase_id = sp.id)
-        ORDER BY sp.phase, sp.polymorph NULLS FIRST`,
-      [release.id, request.speciesId],
+  /** The species phase asked for, among those holding data in the release, with its recommended data. */
+  private async choosePhase(release: ResolvedRelease, request: PropertyRequest): Promise<PhaseThermoRecord> {
+    const phases = [...(await loadSpeciesThermo(this.dataSource.manager, release.id, request.speciesId)).values()].sort(
+      (a, b) => compareText(a.phase, b.phase) || (a.polymorph === b.polymorph ? 0 : a.polymorph === null ? -1 : b.polymorph === null ? 1 : compareText(a.polymorph, b.polymorph)),
     );
     if (phases.length === 0) {
       const exists = (await this.dataSource.query(`SELECT 1 FROM species WHERE id = $1`, [request.speciesId])).length > 0;
@@ -174,7 +171,7 @@ export class SpeciesPropertiesService {
         { parameter: request.phase ? 'polymorph' : 'phase', phases: candidates.map((p) => ({ phase: p.phase, polymorph: p.polymorph })) },
       );
     }
-    return candidates[0].id;
+    return candidates[0];
   }
 
   /** Out-of-range temperatures are a 422 naming them, unless extrapolation was asked for. */
@@ -274,6 +271,11 @@ export class SpeciesPropertiesService {
 interface FormationInputs {
   participants: { symbol: string; species: ComputableSpecies; reference: ElementReference }[];
   uncertaintyKnown(reference: boolean): { enthalpy: boolean; gibbs: boolean };
+}
+
+/** Byte order, as PostgreSQL's C collation sorts (the order phases were always listed in). */
+function compareText(a: string, b: string): number {
+  return a < b ? -1 : a > b ? 1 : 0;
 }
 
 function scale(value: number | null, factor: number): number | null {

@@ -4,7 +4,7 @@ import { securedRouter } from '../auth/access';
 import { openApiValidation } from '../openapi/request-validation';
 import { releaseResolver } from '../releases/release-resolution';
 import { BadRequestError } from '../shared/errors';
-import { setReleaseCaching } from '../shared/http-cache';
+import { releaseResponses } from '../shared/release-response-cache';
 import { uuidParam } from '../shared/params';
 import { queryEnum, queryInt, queryText } from '../shared/query-params';
 import { splitList, temperatures } from '../shared/temperatures';
@@ -20,6 +20,7 @@ export function speciesRoutes(ctx: AppContext) {
   const releases = releaseResolver(reads);
   const species = new SpeciesService(reads);
   const properties = new SpeciesPropertiesService(reads);
+  const answers = releaseResponses(ctx);
 
   r.get('/', 'read', ...validate, async (req, res) => {
     const filter = speciesFilterFromQuery(req);
@@ -29,17 +30,13 @@ export function speciesRoutes(ctx: AppContext) {
       sort: queryEnum(req, 'sort', SORTS),
     };
     const release = await releases.fromQuery(req);
-    const result = await species.search(release, filter, page);
-    setReleaseCaching(res, release, ctx.config.publicRead);
-    res.json(result);
+    await answers.sendJson(req, res, release, () => species.search(release, filter, page));
   });
 
   r.get('/:id', 'read', ...validate, async (req, res) => {
     const id = uuidParam(req.params.id);
     const release = await releases.fromQuery(req);
-    const detail = await species.detail(release, id);
-    setReleaseCaching(res, release, ctx.config.publicRead);
-    res.json(detail);
+    await answers.sendJson(req, res, release, () => species.detail(release, id));
   });
 
   r.get('/:id/properties', 'read', ...validate, async (req, res) => {
@@ -53,17 +50,9 @@ export function speciesRoutes(ctx: AppContext) {
     const units = queryEnum(req, 'units', ['kJ', 'kcal'] as const) ?? 'kJ';
     const polymorph = queryText(req, 'polymorph');
     if (polymorph !== undefined && polymorph.trim() === '') throw new BadRequestError('polymorph must not be blank', { parameter: 'polymorph' });
+    const phase = phaseText === undefined ? undefined : phaseFromText(phaseText);
     const release = await releases.fromQuery(req);
-    const table = await properties.table(release, {
-      speciesId: id,
-      phase: phaseText === undefined ? undefined : phaseFromText(phaseText),
-      polymorph,
-      temperatures: temps,
-      units,
-      extrapolate,
-    });
-    setReleaseCaching(res, release, ctx.config.publicRead);
-    res.json(table);
+    await answers.sendJson(req, res, release, () => properties.table(release, { speciesId: id, phase, polymorph, temperatures: temps, units, extrapolate }));
   });
 
   return r.router;
