@@ -24,7 +24,7 @@ export function authRoutes(ctx: AppContext) {
     res.set('Cache-Control', 'no-store').status(status).json({ accessToken: signedIn.accessToken, expiresIn: signedIn.expiresIn, user: signedIn.user });
   };
 
-  r.post('/login', 'public', ...signInThrottle(), async (req, res) => {
+  r.post('/login', 'public', ...signInThrottle(ctx.dataSource, 'sign-in'), async (req, res) => {
     const body = await validateBody(SignInDto, req.body);
     answer(req, res, await auth.signIn(body.email, body.password, req));
   });
@@ -48,7 +48,7 @@ export function authRoutes(ctx: AppContext) {
     res.set('Cache-Control', 'no-store').json({ id: p.userId, email: p.email, name: p.name, roles: p.roles, via: p.kind });
   });
 
-  r.post('/password-reset/request', 'public', ...signInThrottle(), async (req, res) => {
+  r.post('/password-reset/request', 'public', ...signInThrottle(ctx.dataSource, 'password-reset'), async (req, res) => {
     const body = await validateBody(ResetRequestDto, req.body);
     await auth.requestPasswordReset(body.email, req);
     res.status(202).json({ message: 'If the address has an account, a reset link is on its way.' });

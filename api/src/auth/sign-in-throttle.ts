@@ -1,7 +1,9 @@
 import type { Request, RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import { slowDown } from 'express-slow-down';
+import type { DataSource } from 'typeorm';
 import { TooManyRequestsError } from '../shared/errors';
+import { PostgresRateLimitStore } from './postgres-rate-limit-store';
 
 /** Attempts are counted per client address and e-mail, so one attacker cannot lock out everyone. */
 function attemptKey(req: Request): string {
@@ -22,9 +24,14 @@ export const SIGN_IN_THROTTLE: ThrottleSettings = { freeAttempts: 3, maxAttempts
 /**
  * Progressive delay, then a block: after `freeAttempts` failures each attempt waits 250 ms longer
  * (up to 5 s); after `maxAttempts` failures in the window the answer is 429 until the window ends.
+ * The counts live in PostgreSQL, shared by every API process; `name` keeps each throttled route's
+ * counts apart. When the database cannot be reached the route answers 503 instead of letting
+ * attempts through uncounted.
  */
-export function signInThrottle(settings: ThrottleSettings = SIGN_IN_THROTTLE): RequestHandler[] {
+export function signInThrottle(dataSource: DataSource, name: string, settings: ThrottleSettings = SIGN_IN_THROTTLE): RequestHandler[] {
   const delay = slowDown({
+    store: new PostgresRateLimitStore(dataSource, `${name}:delay:`),
+    passOnStoreError: false,
     windowMs: settings.windowMs,
     delayAfter: settings.freeAttempts,
     delayMs: (used) => Math.min((used - settings.freeAttempts) * 250, 5000),
@@ -33,6 +40,8 @@ export function signInThrottle(settings: ThrottleSettings = SIGN_IN_THROTTLE): R
     validate: { keyGeneratorIpFallback: false },
   });
   const block = rateLimit({
+    store: new PostgresRateLimitStore(dataSource, `${name}:block:`),
+    passOnStoreError: false,
     windowMs: settings.windowMs,
     limit: settings.maxAttempts,
     skipSuccessfulRequests: true,

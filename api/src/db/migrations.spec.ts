@@ -4,8 +4,8 @@ import { withScratchDatabase } from './test-database';
 /** Tables the migrations create (pg-boss keeps its own schema and is not listed). */
 const TABLES = [
   'api_keys', 'audit_entries', 'evidence_files', 'heat_capacity_fits', 'import_jobs', 'one_time_tokens', 'proposal_comments',
-  'proposal_items', 'proposal_reviews', 'proposals', 'refresh_tokens', 'release_members', 'releases', 'saved_reaction_terms',
-  'saved_reactions', 'sources', 'species', 'species_phases', 'thermo_values', 'users', 'watches',
+  'proposal_items', 'proposal_reviews', 'proposals', 'rate_limit_counters', 'refresh_tokens', 'release_members', 'releases',
+  'saved_reaction_terms', 'saved_reactions', 'sources', 'species', 'species_phases', 'thermo_values', 'users', 'watches',
 ];
 
 async function schemaObjects(ds: DataSource) {
