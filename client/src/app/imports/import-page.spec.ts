@@ -50,6 +50,19 @@ describe('ImportPage', () => {
     expect(button('Import into a draft proposal')).toBeUndefined();
   });
 
+  it('keeps the problem table readable on a phone, scrolling it sideways in its own box', async () => {
+    element().style.display = 'block';
+    element().style.width = '358px';
+    await check({ ...job, errorCount: 1, errors: [{ line: 3, field: 'unit', message: 'unit must be one of kJ/mol…' }], rows: 2, wouldCreate: { species: 0, phases: 0, values: 1 } });
+    const table = element().querySelector<HTMLElement>('.kx-problem-table')!;
+    const box = table.parentElement!;
+    expect(table.offsetWidth).toBeGreaterThan(358);
+    expect(box.clientWidth).toBeLessThanOrEqual(358);
+    expect(box.scrollWidth).toBeGreaterThan(box.clientWidth);
+    expect(box.getAttribute('tabindex')).toBe('0');
+    expect(element().scrollWidth).toBeLessThanOrEqual(358);
+  });
+
   it('imports a clean file, follows the job to the end and links the draft proposal', async () => {
     await check({ ...job, rows: 2, wouldCreate: { species: 0, phases: 0, values: 2 } });
     expect(element().textContent).toContain('No problems: the import would add 2 values');

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, computed, effect, inject, input, output, signal, untracked, viewChild } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, computed, inject, input, output, signal, viewChild } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -9,13 +9,15 @@ import { map, startWith } from 'rxjs';
 
 import { findPhase } from '../shared/catalogue/catalogue-api';
 import { ProposalItem } from '../shared/proposals/proposal';
-import { COEFFICIENT_COUNTS, FIT_FORMS, METHODS, STANDARD_PRESSURES } from '../shared/vocabulary/thermo-vocabulary';
+import { COEFFICIENT_COUNTS, FIT_FORMS } from '../shared/vocabulary/thermo-vocabulary';
 import { catalogueRecord } from './catalogue-record';
 import { FitEntryForm, fitEntryForm, fitEntryFromPayload, fitPayload, fitRangeForm, fitRanges, revalidateFit } from './fit-entry-rules';
 import { FitPlot } from '../shared/heat-capacity/fit-plot';
-import { ItemDraft, prerequisitesFor } from './item-draft';
-import { SourceChoice, SourcePicker } from '../shared/sources/source-picker';
-import { SpeciesChoice, Subject, subjectComplete, subjectFieldsOf, subjectOf, subjectPayload } from './subject';
+import { fillEditedSubject } from './edited-subject';
+import { ItemDraft, lacksSubject, subjectItemDraft } from './item-draft';
+import { ProvenanceFields } from './provenance-fields';
+import { SourceChoice } from '../shared/sources/source-picker';
+import { SpeciesChoice, Subject } from './subject';
 import { SubjectPicker } from './subject-picker';
 
 /**
@@ -24,7 +26,7 @@ import { SubjectPicker } from './subject-picker';
  */
 @Component({
   selector: 'kx-fit-item-form',
-  imports: [FitPlot, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ReactiveFormsModule, SourcePicker, SubjectPicker],
+  imports: [FitPlot, MatButtonModule, MatFormFieldModule, MatInputModule, MatSelectModule, ProvenanceFields, ReactiveFormsModule, SubjectPicker],
   templateUrl: './fit-item-form.html',
   styleUrls: ['./item-forms.scss', './fit-item-form.scss'],
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -32,7 +34,7 @@ import { SubjectPicker } from './subject-picker';
 export class FitItemForm implements OnInit {
   private readonly destroyRef = inject(DestroyRef);
   private readonly subjectPicker = viewChild(SubjectPicker);
-  private readonly sourcePicker = viewChild(SourcePicker);
+  private readonly provenance = viewChild(ProvenanceFields);
 
   readonly proposed = input<readonly SpeciesChoice[]>([]);
   readonly addedPhases = input<ReadonlyMap<string, readonly { phase: string; polymorph: string | null }[]>>(new Map());
@@ -49,8 +51,6 @@ export class FitItemForm implements OnInit {
   protected readonly submitted = signal(false);
 
   protected readonly forms = FIT_FORMS;
-  protected readonly methods = METHODS;
-  protected readonly pressures = STANDARD_PRESSURES;
 
   private readonly entry = toSignal(this.form.valueChanges.pipe(startWith(null), map(() => this.form.getRawValue())), {
     initialValue: this.form.getRawValue(),
@@ -62,7 +62,6 @@ export class FitItemForm implements OnInit {
     return form === 'tabulated' ? 'One “T Cp” pair per line (K, J/(mol·K))' : `${COEFFICIENT_COUNTS[form]} numbers, in order; paste them as printed`;
   });
   protected readonly plotRanges = computed(() => fitRanges(this.entry()));
-  protected readonly computedMethod = computed(() => this.entry().method === 'computed');
   private readonly record = catalogueRecord(computed(() => this.subject()?.species.id ?? null));
   protected readonly existingPhase = computed(() => {
     const record = this.record();
@@ -72,14 +71,7 @@ export class FitItemForm implements OnInit {
   protected readonly existingFits = computed(() => this.existingPhase()?.fits ?? []);
 
   constructor() {
-    // Editing an item about a catalogue species: its record may arrive after the form opens.
-    effect(() => {
-      const item = this.item();
-      const known = this.knownSpecies();
-      if (item && known && untracked(() => this.subject()) === null) {
-        this.subject.set(subjectOf(item.payload, [known]));
-      }
-    });
+    fillEditedSubject(this.item, this.proposed, this.knownSpecies, this.subject);
   }
 
   ngOnInit(): void {
@@ -95,11 +87,7 @@ export class FitItemForm implements OnInit {
       if (item.kind === 'replace_fit') {
         this.replaces.set(String(item.payload['fitId'] ?? ''));
       }
-      const known = [...this.proposed(), ...(this.knownSpecies() ? [this.knownSpecies()!] : [])];
-      this.subject.set(subjectOf(item.payload, known));
-      if (item.source) {
-        this.source.set({ id: item.source.id, shortKey: item.source.shortKey, title: item.source.title });
-      }
+      this.source.set(item.source);
     }
     revalidateFit(this.form);
     this.form.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe(() => revalidateFit(this.form));
@@ -131,26 +119,19 @@ export class FitItemForm implements OnInit {
   protected saveFit(): void {
     this.submitted.set(true);
     revalidateFit(this.form);
-    const subject = this.subject();
     const replaces = this.replaces();
-    const original = this.item() ? subjectFieldsOf(this.item()!.payload) : null;
-    if (this.form.invalid || !this.source() || (!replaces && !(original && subject === null) && !subjectComplete(subject))) {
+    if (this.form.invalid || !this.source() || (!replaces && lacksSubject(this.subject(), this.item()))) {
       this.form.markAllAsTouched();
       this.subjectPicker()?.touch();
-      this.sourcePicker()?.touch();
+      this.provenance()?.touch();
       return;
     }
     const payload = fitPayload(this.form.getRawValue());
-    if (replaces) {
-      this.save.emit({ kind: 'replace_fit', payload: { fitId: replaces, ...payload }, sourceId: this.source()!.id, prerequisites: [] });
-      return;
-    }
-    const complete = subjectComplete(subject) ? subject : null;
-    this.save.emit({
-      kind: 'add_fit',
-      payload: { ...(complete ? subjectPayload(complete) : original), ...payload },
-      sourceId: this.source()!.id,
-      prerequisites: this.item() || !complete ? [] : prerequisitesFor(complete),
-    });
+    const sourceId = this.source()!.id;
+    this.save.emit(
+      replaces
+        ? { kind: 'replace_fit', payload: { fitId: replaces, ...payload }, sourceId, prerequisites: [] }
+        : subjectItemDraft('add_fit', this.subject(), this.item(), payload, sourceId),
+    );
   }
 }

@@ -16,7 +16,7 @@ import { Loadable, loadable } from '../shared/loadable/loadable';
 import { LoadingIndicator } from '../shared/loading-indicator/loading-indicator';
 import { ageText } from '../shared/proposals/age';
 import { PROPOSAL_STATES, ProposalPage, ProposalState, STATE_LABELS } from '../shared/proposals/proposal';
-import { ProposalStateBadge } from '../shared/proposals/proposal-state-badge';
+import { ProposalTable } from '../shared/proposals/proposal-table';
 import { ProposalsApi } from '../shared/proposals/proposals-api';
 
 /** States still on their way; the rest have ended. */
@@ -38,7 +38,7 @@ const OPEN_STATES: readonly ProposalState[] = ['draft', 'submitted', 'in_review'
     MatInputModule,
     MatSelectModule,
     MatTableModule,
-    ProposalStateBadge,
+    ProposalTable,
     ReactiveFormsModule,
     RouterLink,
   ],

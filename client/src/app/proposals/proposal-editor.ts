@@ -1,5 +1,4 @@
 import { BreakpointObserver } from '@angular/cdk/layout';
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, linkedSignal, signal } from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatButtonToggleModule } from '@angular/material/button-toggle';
@@ -12,14 +11,14 @@ import { AuthService } from '../core/auth';
 import { CatalogueApi } from '../shared/catalogue/catalogue-api';
 import { ConfirmDialog, ConfirmDialogData } from '../shared/confirm-dialog/confirm-dialog';
 import { EmptyState } from '../shared/empty-state/empty-state';
-import { CheckList } from '../shared/proposals/check-list';
 import { CommentThread } from '../shared/proposals/comment-thread';
-import { EvidenceList } from '../shared/proposals/evidence-list';
+import { ItemCard } from '../shared/proposals/item-card';
 import { describeItem } from '../shared/proposals/item-description';
-import { DECISION_LABELS, Proposal, ProposalComment, ProposalItem } from '../shared/proposals/proposal';
+import { Proposal, ProposalComment, ProposalItem } from '../shared/proposals/proposal';
 import { offeredActions } from '../shared/proposals/proposal-actions';
-import { ProposalStateBadge } from '../shared/proposals/proposal-state-badge';
+import { ProposalHeader } from '../shared/proposals/proposal-header';
 import { ProposalsApi } from '../shared/proposals/proposals-api';
+import { ReviewHistory } from '../shared/proposals/review-history';
 import { EvidenceUpload } from './evidence-upload';
 import { FitItemForm } from './fit-item-form';
 import { ItemDraft } from './item-draft';
@@ -39,18 +38,17 @@ export type NewItemKind = 'value' | 'fit' | 'species' | 'phase' | 'retire';
 @Component({
   selector: 'kx-proposal-editor',
   imports: [
-    CheckList,
     CommentThread,
-    DatePipe,
     EmptyState,
-    EvidenceList,
     EvidenceUpload,
     FitItemForm,
+    ItemCard,
     MatButtonModule,
     MatButtonToggleModule,
     PhaseItemForm,
-    ProposalStateBadge,
+    ProposalHeader,
     RetireItemForm,
+    ReviewHistory,
     RouterLink,
     SpeciesItemForm,
     ValueItemForm,
@@ -77,7 +75,6 @@ export class ProposalEditor {
   /** Catalogue species the items name by id: their names, and what the edit forms need. */
   private readonly catalogueSpecies = signal<ReadonlyMap<string, SpeciesChoice>>(new Map());
 
-  protected readonly decisionLabels = DECISION_LABELS;
   /** On a phone the kinds of item stack, so that none is cut off. */
   protected readonly narrow = toSignal(inject(BreakpointObserver).observe('(max-width: 599.98px)').pipe(map((state) => state.matches)), {
     initialValue: false,
@@ -96,7 +93,6 @@ export class ProposalEditor {
   });
   protected readonly lastReview = computed(() => this.current().reviews.at(-1) ?? null);
   protected readonly sentBack = computed(() => this.current().state === 'changes_requested' ? this.lastReview() : null);
-  protected readonly checksRan = computed(() => this.current().items.some((item) => item.checks !== null));
 
   constructor() {
     effect(() => this.loadComments(this.current().id));

@@ -137,8 +137,16 @@ export function revalidateDependents(form: ValueEntryForm): void {
   }
 }
 
-/** The sentence to show for a field's first error. */
-export function valueEntryMessage(field: keyof ValueEntry, errors: ValidationErrors | null, quantity?: QuantityCode): string {
+/** The fields every entry shares: how it was obtained and where in its source it stands. */
+export type ProvenanceField = 'method' | 'levelOfTheory' | 'sourceLocator' | 'notes';
+
+/** The sentence to show for a provenance field's first error; `entry` names what is entered ("value", "fit"). */
+export function provenanceMessage(field: ProvenanceField, errors: ValidationErrors | null, entry: string): string {
+  return valueEntryMessage(field, errors, undefined, entry);
+}
+
+/** The sentence to show for a field's first error; `entry` names what is entered in messages about the method. */
+export function valueEntryMessage(field: keyof ValueEntry, errors: ValidationErrors | null, quantity?: QuantityCode, entry = 'value'): string {
   if (!errors) {
     return '';
   }
@@ -149,8 +157,8 @@ export function valueEntryMessage(field: keyof ValueEntry, errors: ValidationErr
         unit: 'Choose the unit.',
         coverageFactor: 'An expanded uncertainty needs its coverage factor k (e.g. 2).',
         temperatureK: 'Enter the temperature in kelvin (298.15 for standard values).',
-        method: 'Say how the value was obtained.',
-        levelOfTheory: 'A computed value needs its level of theory (e.g. G4, CCSD(T)/CBS).',
+        method: `Say how the ${entry} was obtained.`,
+        levelOfTheory: `A computed ${entry} needs its level of theory (e.g. G4, CCSD(T)/CBS).`,
         transitionKind: 'Say which transition this enthalpy belongs to.',
       } as Partial<Record<keyof ValueEntry, string>>
     )[field] ?? 'Required.';

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, computed, effect, inject, input, output, signal, untracked, viewChild } from '@angular/core';
+import { ChangeDetectionStrategy, Component, DestroyRef, OnInit, computed, inject, input, output, signal, viewChild } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
@@ -13,18 +13,13 @@ import { CatalogueValue, findPhase, valuesOf } from '../shared/catalogue/catalog
 import { ProposalItem } from '../shared/proposals/proposal';
 import { Quantity } from '../shared/quantity/quantity';
 import { convertFromSi } from '../shared/unit-selector/molar-energy-unit';
-import {
-  METHODS,
-  QUANTITIES,
-  QuantityCode,
-  STANDARD_PRESSURES,
-  TRANSITIONS,
-  unitsFor,
-} from '../shared/vocabulary/thermo-vocabulary';
+import { QUANTITIES, QuantityCode, TRANSITIONS, unitsFor } from '../shared/vocabulary/thermo-vocabulary';
 import { catalogueRecord } from './catalogue-record';
-import { ItemDraft, prerequisitesFor } from './item-draft';
-import { SourceChoice, SourcePicker } from '../shared/sources/source-picker';
-import { SpeciesChoice, Subject, subjectComplete, subjectFieldsOf, subjectOf, subjectPayload } from './subject';
+import { fillEditedSubject } from './edited-subject';
+import { ItemDraft, lacksSubject, subjectItemDraft } from './item-draft';
+import { ProvenanceFields } from './provenance-fields';
+import { SourceChoice } from '../shared/sources/source-picker';
+import { SpeciesChoice, Subject } from './subject';
 import { SubjectPicker } from './subject-picker';
 import { ValueEntry, entryFromPayload, revalidateDependents, valueEntryForm, valueEntryMessage, valuePayload } from './value-entry-rules';
 
@@ -44,9 +39,9 @@ let nextFormId = 0;
     MatInputModule,
     MatRadioModule,
     MatSelectModule,
+    ProvenanceFields,
     Quantity,
     ReactiveFormsModule,
-    SourcePicker,
     SubjectPicker,
   ],
   templateUrl: './value-item-form.html',
@@ -56,7 +51,7 @@ let nextFormId = 0;
 export class ValueItemForm implements OnInit {
   private readonly destroyRef = inject(DestroyRef);
   private readonly subjectPicker = viewChild(SubjectPicker);
-  private readonly sourcePicker = viewChild(SourcePicker);
+  private readonly provenance = viewChild(ProvenanceFields);
 
   /** Species and phases the proposal adds, to offer in the pickers. */
   readonly proposed = input<readonly SpeciesChoice[]>([]);
@@ -78,15 +73,12 @@ export class ValueItemForm implements OnInit {
 
   protected readonly quantities = QUANTITIES;
   protected readonly transitions = TRANSITIONS;
-  protected readonly methods = METHODS;
-  protected readonly pressures = STANDARD_PRESSURES;
 
   private readonly entry = toSignal(this.form.valueChanges.pipe(startWith(null)), { initialValue: null });
   protected readonly quantity = computed(() => (this.entry(), this.form.controls.quantity.value));
   protected readonly units = computed(() => unitsFor(this.quantity()));
   protected readonly showTransition = computed(() => this.quantity() === 'dtrsH');
   protected readonly expanded = computed(() => (this.entry(), this.form.controls.uncertaintyKind.value === 'expanded'));
-  protected readonly computedMethod = computed(() => (this.entry(), this.form.controls.method.value === 'computed'));
   protected readonly editingRevision = computed(() => this.item()?.kind === 'revise_value');
 
   private readonly record = catalogueRecord(computed(() => this.subject()?.species.id ?? null));
@@ -106,14 +98,7 @@ export class ValueItemForm implements OnInit {
   protected readonly release = computed(() => this.record()?.release ?? '');
 
   constructor() {
-    // Editing an item about a catalogue species: its record may arrive after the form opens.
-    effect(() => {
-      const item = this.item();
-      const known = this.knownSpecies();
-      if (item && known && untracked(() => this.subject()) === null) {
-        this.subject.set(subjectOf(item.payload, [known]));
-      }
-    });
+    fillEditedSubject(this.item, this.proposed, this.knownSpecies, this.subject);
   }
 
   ngOnInit(): void {
@@ -123,11 +108,7 @@ export class ValueItemForm implements OnInit {
       if (item.kind === 'revise_value') {
         this.revises.set(String(item.payload['valueId'] ?? ''));
       }
-      const known = [...this.proposed(), ...(this.knownSpecies() ? [this.knownSpecies()!] : [])];
-      this.subject.set(subjectOf(item.payload, known));
-      if (item.source) {
-        this.source.set({ id: item.source.id, shortKey: item.source.shortKey, title: item.source.title });
-      }
+      this.source.set(item.source);
     }
     revalidateDependents(this.form);
     this.form.controls.quantity.valueChanges.pipe(takeUntilDestroyed(this.destroyRef)).subscribe((quantity) => {
@@ -154,28 +135,20 @@ export class ValueItemForm implements OnInit {
   protected saveValue(): void {
     this.submitted.set(true);
     revalidateDependents(this.form);
-    const subject = this.subject();
-    const original = this.item() ? subjectFieldsOf(this.item()!.payload) : null;
-    const needsSubject = !this.editingRevision() && !(original && subject === null);
-    if (this.form.invalid || !this.source() || (needsSubject && !subjectComplete(subject))) {
+    if (this.form.invalid || !this.source() || (!this.editingRevision() && lacksSubject(this.subject(), this.item()))) {
       this.form.markAllAsTouched();
       this.subjectPicker()?.touch();
-      this.sourcePicker()?.touch();
+      this.provenance()?.touch();
       return;
     }
     const entry = this.form.getRawValue();
     const revises = this.revises();
-    if (revises) {
-      this.save.emit({ kind: 'revise_value', payload: { valueId: revises, ...valuePayload(entry, { withQuantity: false }) }, sourceId: this.source()!.id, prerequisites: [] });
-      return;
-    }
-    const complete = subjectComplete(subject) ? subject : null;
-    this.save.emit({
-      kind: 'add_value',
-      payload: { ...(complete ? subjectPayload(complete) : original), ...valuePayload(entry, { withQuantity: true }) },
-      sourceId: this.source()!.id,
-      prerequisites: this.item() || !complete ? [] : prerequisitesFor(complete),
-    });
+    const sourceId = this.source()!.id;
+    this.save.emit(
+      revises
+        ? { kind: 'revise_value', payload: { valueId: revises, ...valuePayload(entry, { withQuantity: false }) }, sourceId, prerequisites: [] }
+        : subjectItemDraft('add_value', this.subject(), this.item(), valuePayload(entry, { withQuantity: true }), sourceId),
+    );
   }
 }
 

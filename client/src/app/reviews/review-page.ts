@@ -1,21 +1,18 @@
-import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, linkedSignal, signal } from '@angular/core';
-import { RouterLink } from '@angular/router';
 import { catchError, forkJoin, of } from 'rxjs';
 
 import { AuthService } from '../core/auth';
 import { CatalogueApi, CataloguePhase, CatalogueSpecies, findPhase } from '../shared/catalogue/catalogue-api';
 import { FitPlot } from '../shared/heat-capacity/fit-plot';
 import { FitRangeInput } from '../shared/heat-capacity/heat-capacity';
-import { CheckList } from '../shared/proposals/check-list';
 import { CommentThread } from '../shared/proposals/comment-thread';
-import { EvidenceList } from '../shared/proposals/evidence-list';
-import { ageText } from '../shared/proposals/age';
+import { ItemCard } from '../shared/proposals/item-card';
 import { describeItem } from '../shared/proposals/item-description';
-import { DECISION_LABELS, Proposal, ProposalComment } from '../shared/proposals/proposal';
+import { Proposal, ProposalComment } from '../shared/proposals/proposal';
 import { offeredActions, reviewRefusal } from '../shared/proposals/proposal-actions';
-import { ProposalStateBadge } from '../shared/proposals/proposal-state-badge';
+import { ProposalHeader } from '../shared/proposals/proposal-header';
 import { ProposalsApi } from '../shared/proposals/proposals-api';
+import { ReviewHistory } from '../shared/proposals/review-history';
 import { Quantity } from '../shared/quantity/quantity';
 import { convertFromSi } from '../shared/unit-selector/molar-energy-unit';
 import { FitForm, METHODS } from '../shared/vocabulary/thermo-vocabulary';
@@ -31,7 +28,7 @@ import { ReviewDecision } from './review-decision';
  */
 @Component({
   selector: 'kx-review-page',
-  imports: [CheckList, CommentThread, DatePipe, EvidenceList, FitPlot, ImpactPanel, ProposalStateBadge, Quantity, ReviewDecision, RouterLink],
+  imports: [CommentThread, FitPlot, ImpactPanel, ItemCard, ProposalHeader, Quantity, ReviewDecision, ReviewHistory],
   templateUrl: './review-page.html',
   styleUrl: './review-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -48,7 +45,6 @@ export class ReviewPage {
   protected readonly comments = signal<readonly ProposalComment[]>([]);
   protected readonly records = signal<ReadonlyMap<string, CatalogueSpecies>>(new Map());
   protected readonly announcement = signal('');
-  protected readonly decisionLabels = DECISION_LABELS;
 
   protected readonly viewer = computed(() => ({
     isAuthor: this.current().author.id === String(this.auth.user()?.id ?? ''),
@@ -56,10 +52,6 @@ export class ReviewPage {
   }));
   protected readonly canDecide = computed(() => offeredActions(this.current(), this.viewer()).includes('approve'));
   protected readonly refusal = computed(() => reviewRefusal(this.current().state, this.viewer(), this.current().release?.label));
-  protected readonly waiting = computed(() => {
-    const submitted = this.current().submittedAt;
-    return submitted ? ageText(submitted) : null;
-  });
   protected readonly release = computed(() => [...this.records().values()][0]?.release ?? 'the latest release');
   protected readonly items = computed(() => {
     const records = this.records();

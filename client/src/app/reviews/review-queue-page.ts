@@ -7,7 +7,7 @@ import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
 import { MatSlideToggleModule } from '@angular/material/slide-toggle';
 import { MatTableModule } from '@angular/material/table';
-import { Router, RouterLink } from '@angular/router';
+import { Router } from '@angular/router';
 import { switchMap } from 'rxjs';
 
 import { EmptyState } from '../shared/empty-state/empty-state';
@@ -16,7 +16,7 @@ import { Loadable, loadable } from '../shared/loadable/loadable';
 import { LoadingIndicator } from '../shared/loading-indicator/loading-indicator';
 import { ageText } from '../shared/proposals/age';
 import { AWAITING_REVIEW, PROPOSAL_STATES, ProposalPage, ProposalState, STATE_LABELS } from '../shared/proposals/proposal';
-import { ProposalStateBadge } from '../shared/proposals/proposal-state-badge';
+import { ProposalTable } from '../shared/proposals/proposal-table';
 import { ProposalSort, ProposalsApi } from '../shared/proposals/proposals-api';
 
 export const QUEUE_SORTS: readonly { readonly value: ProposalSort; readonly label: string }[] = [
@@ -70,8 +70,7 @@ export function statesFor(state: string): readonly ProposalState[] | undefined {
     MatSelectModule,
     MatSlideToggleModule,
     MatTableModule,
-    ProposalStateBadge,
-    RouterLink,
+    ProposalTable,
   ],
   templateUrl: './review-queue-page.html',
   styleUrl: './review-queue-page.scss',
