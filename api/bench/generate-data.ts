@@ -17,7 +17,7 @@ import { loadConfig } from '../src/config';
 import { prepareDatabase } from '../tools/prepare-database';
 import { recreateDatabase, readMarker, startBenchCluster, writeMarker, type BenchCluster, type BenchMarker } from './bench-cluster';
 import { withIndexesRebuilt } from './bulk-load';
-import { copyLine, copyRows } from './copy-writer';
+import { copyLine, copyRows } from '../src/shared/copy-rows';
 import { benchId } from './seeded-random';
 import { generateCatalogue, type SpeciesPlan } from './synthetic-species';
 import { nasa7Fit, phaseTruths, referenceEntropies } from './synthetic-thermo';

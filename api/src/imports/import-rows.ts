@@ -3,7 +3,7 @@ import { hillFormula } from '../thermo/formula-format';
 import { tryParseFormula } from '../thermo/formula';
 import { normalizeDoi } from '../sources/doi';
 import { PHASE_CODES, type PhaseCode } from '../species/phase-code';
-import { itemColumns, resolveItems, type CatalogueView, type ItemInput } from '../proposals/proposal-subjects';
+import { itemColumns, resolveItems, type CatalogueSpecies, type CatalogueView, type ItemInput } from '../proposals/proposal-subjects';
 import type { Quantity } from '../values/value-vocabulary';
 import type { ImportProblem, ImportRow } from './import-files';
 
@@ -38,10 +38,35 @@ export interface ImportSources {
   byDoi: Map<string, string>;
 }
 
+/** What the rows refer to, to load from the database before checking them. */
+export interface ImportReferences {
+  /** Hill formulas (as `hillFormula` writes them) of rows that give no name: any species of these may be meant */
+  hillFormulas: string[];
+  /** Hill formulas of rows that give a name: only species of these answering to one of `names` may be meant */
+  namedHillFormulas: string[];
+  names: string[];
+  sourceKeys: string[];
+  /** DOIs as normalised */
+  dois: string[];
+  /** the rows' formulas as read, for `draftImport` to reuse */
+  formulas: FormulaReader;
+}
+
+/** The rows as items, before their subjects are resolved against the catalogue. */
+export interface DraftImport {
+  /** in position order: items[i] has position i + 1 */
+  items: ItemInput[];
+  /** lines[i]: the line items[i] comes from */
+  lines: number[];
+  values: { item: ItemInput; line: number; duplicateKey: string; what: string }[];
+  problems: ImportProblem[];
+  counts: { species: number; phases: number; values: number };
+}
+
 export interface PreparedImport {
   items: ItemInput[];
-  /** the reference columns of each item (species, species phase), as resolved */
-  columns: Map<string, ReturnType<typeof itemColumns>>;
+  /** columns[i]: the reference columns (species, species phase) of items[i], as resolved */
+  columns: ReturnType<typeof itemColumns>[];
   problems: ImportProblem[];
   counts: { species: number; phases: number; values: number };
 }
@@ -65,25 +90,79 @@ export function readTemperature(text: string): number | undefined {
   return match ? Number(match[1]) : undefined;
 }
 
-export function prepareImport(rows: ImportRow[], catalogue: CatalogueView, sources: ImportSources): PreparedImport {
+type FormulaReader = ReturnType<typeof formulaReader>;
+
+/** Files repeat a few formulas many times: each distinct text is parsed once. */
+function formulaReader() {
+  const parsedOf = new Map<string, ReturnType<typeof tryParseFormula>>();
+  const hills = new Map<ParsedFormulaOf, string>();
+  return {
+    parse(text: string) {
+      let parsed = parsedOf.get(text);
+      if (!parsed) parsedOf.set(text, (parsed = tryParseFormula(text)));
+      return parsed;
+    },
+    hill(formula: ParsedFormulaOf) {
+      let hill = hills.get(formula);
+      if (hill === undefined) hills.set(formula, (hill = hillFormula(formula)));
+      return hill;
+    },
+  };
+}
+
+/** The formulas and sources the rows name, so that only those are loaded to check them. */
+export function importReferences(rows: ImportRow[]): ImportReferences {
+  const formulas = formulaReader();
+  const hillFormulas = new Set<string>();
+  const namedHillFormulas = new Set<string>();
+  const names = new Set<string>();
+  const sourceKeys = new Set<string>();
+  const dois = new Set<string>();
+  for (const { fields: f } of rows) {
+    const parsed = f.formula ? formulas.parse(f.formula) : undefined;
+    if (parsed?.ok) {
+      const hill = formulas.hill(parsed.formula);
+      if (f.name) {
+        namedHillFormulas.add(hill);
+        names.add(f.name);
+      } else {
+        hillFormulas.add(hill);
+      }
+    }
+    if (f.sourceKey) sourceKeys.add(f.sourceKey);
+    const doi = f.doi ? normalizeDoi(f.doi) : undefined;
+    if (doi) dois.add(doi);
+  }
+  return { hillFormulas: [...hillFormulas], namedHillFormulas: [...namedHillFormulas], names: [...names], sourceKeys: [...sourceKeys], dois: [...dois], formulas };
+}
+
+/**
+ * Species that the drafted items name by name rather than by id (those the import adds): the
+ * catalogue must also hold every species answering to these names for the check to see clashes.
+ */
+export function speciesNamesIn(draft: DraftImport): string[] {
+  const names = new Set<string>();
+  for (const item of draft.items) if (typeof item.payload.species === 'string') names.add(item.payload.species);
+  return [...names];
+}
+
+/**
+ * Every row checked and made an item. `catalogue` must hold at least the species the rows'
+ * formulas and names can mean (`references`), `sources` at least the sources they name.
+ */
+export function draftImport(rows: ImportRow[], references: ImportReferences, catalogue: CatalogueView, sources: ImportSources): DraftImport {
   const problems: ImportProblem[] = [];
-  const byHill = new Map<string, { id: string; name: string; synonyms: string[]; formula: string }[]>();
+  const byHill = new Map<string, CatalogueSpecies[]>();
   for (const s of catalogue.speciesById.values()) {
     const key = `${s.hillFormula}|${s.charge}`;
-    byHill.set(key, [...(byHill.get(key) ?? []), s]);
+    const group = byHill.get(key);
+    if (group) group.push(s);
+    else byHill.set(key, [s]);
   }
   const newSpecies = new Map<string, { item: ItemInput; line: number }>();
   const newPhases = new Map<string, { item: ItemInput; line: number }>();
-  const valueItems: { item: ItemInput; line: number; duplicateKey: string; what: string }[] = [];
-  const lineOf = new Map<string, number>();
-  // Files repeat a few formulas many times: each distinct text is parsed once.
-  const formulas = new Map<string, ReturnType<typeof tryParseFormula>>();
-  const parse = (text: string) => {
-    let parsed = formulas.get(text);
-    if (!parsed) formulas.set(text, (parsed = tryParseFormula(text)));
-    return parsed;
-  };
-  const hills = new Map<ParsedFormulaOf, string>();
+  const valueItems: DraftImport['values'] = [];
+  const { formulas } = references;
 
   for (const row of rows) {
     const f = row.fields;
@@ -91,7 +170,7 @@ export function prepareImport(rows: ImportRow[], catalogue: CatalogueView, sourc
     const problem = (field: string, message: string) => problems.push({ line: row.line, field, message });
 
     if (!f.formula) problem('formula', 'formula is required');
-    const parsed = f.formula ? parse(f.formula) : undefined;
+    const parsed = f.formula ? formulas.parse(f.formula) : undefined;
     if (parsed && !parsed.ok) problem('formula', `formula ${f.formula} cannot be read: ${parsed.error.message}`);
     const quantity = f.quantity ? QUANTITY_SPELLINGS[f.quantity.trim().toLowerCase()] ?? (['dfH', 'S', 'Cp', 'dfG', 'dtrsH'].includes(f.quantity) ? (f.quantity as Quantity) : undefined) : undefined;
     if (!f.quantity) problem('quantity', 'quantity is required (dfH, S, Cp, dfG or dtrsH)');
@@ -119,8 +198,7 @@ export function prepareImport(rows: ImportRow[], catalogue: CatalogueView, sourc
 
     // Which species: the formula as written, else the same Hill formula and charge; a name narrows it down or adds a species.
     const formula = parsed.formula;
-    let hill = hills.get(formula);
-    if (hill === undefined) hills.set(formula, (hill = hillFormula(formula)));
+    const hill = formulas.hill(formula);
     const sameFormula = byHill.get(`${hill}|${formula.charge}`) ?? [];
     const named = f.name ? sameFormula.filter((s) => [s.name, ...s.synonyms].some((n) => n.toLowerCase() === f.name!.toLowerCase())) : sameFormula;
     const exact = named.filter((s) => s.formula === f.formula);
@@ -186,26 +264,35 @@ export function prepareImport(rows: ImportRow[], catalogue: CatalogueView, sourc
   const ordered = [...newSpecies.values(), ...newPhases.values(), ...valueItems];
   ordered.forEach((entry, index) => {
     entry.item.position = index + 1;
-    lineOf.set(entry.item.id, entry.line);
   });
-  const items = ordered.map((e) => e.item);
-  const withProblems = new Set<string>();
-  const columns = new Map<string, ReturnType<typeof itemColumns>>();
-  for (const resolved of resolveItems(items, catalogue)) {
-    columns.set(resolved.item.id, itemColumns(resolved));
+  return { items: ordered.map((e) => e.item), lines: ordered.map((e) => e.line), values: valueItems, problems, counts: { species: newSpecies.size, phases: newPhases.size, values: valueItems.length } };
+}
+
+/**
+ * The drafted items resolved exactly as items added by hand would be, their problems reported at
+ * the rows' lines, and repeated values found. `catalogue` must also hold the species named in
+ * `speciesNamesIn(draft)`.
+ */
+export function checkDraft(draft: DraftImport, catalogue: CatalogueView): PreparedImport {
+  const problems = [...draft.problems];
+  const withProblems: boolean[] = [];
+  const columns: PreparedImport['columns'] = [];
+  for (const resolved of resolveItems(draft.items, catalogue)) {
+    const index = resolved.item.position - 1;
+    columns[index] = itemColumns(resolved);
     for (const p of resolved.problems) {
-      problems.push({ line: lineOf.get(resolved.item.id)!, field: COLUMN_OF[p.field] ?? p.field, message: p.message });
-      withProblems.add(resolved.item.id);
+      problems.push({ line: draft.lines[index], field: COLUMN_OF[p.field] ?? p.field, message: p.message });
+      withProblems[index] = true;
     }
   }
   // Repeats among the rows that are otherwise fine.
   const seen = new Map<string, number>();
-  for (const v of valueItems) {
-    if (withProblems.has(v.item.id)) continue;
+  for (const v of draft.values) {
+    if (withProblems[v.item.position - 1]) continue;
     const first = seen.get(v.duplicateKey);
     if (first !== undefined) problems.push({ line: v.line, field: 'quantity', message: `line ${first} already gives ${v.what} of this species phase from the same source at the same temperature` });
     else seen.set(v.duplicateKey, v.line);
   }
   problems.sort((a, b) => a.line - b.line);
-  return { items, columns, problems, counts: { species: newSpecies.size, phases: newPhases.size, values: valueItems.length } };
+  return { items: draft.items, columns, problems, counts: draft.counts };
 }

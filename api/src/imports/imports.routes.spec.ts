@@ -18,6 +18,19 @@ async function finished(app: Express, auth: string, id: string, timeoutMs = 120_
   }
 }
 
+const GASES = [['H2O', 'water'], ['CO2', 'carbon dioxide'], ['CH4', 'methane'], ['N2', 'nitrogen'], ['O2', 'oxygen'], ['H2', 'hydrogen'], ['CO', 'carbon monoxide'], ['NH3', 'ammonia']];
+
+/** `n` valid, distinct Cp° rows (HEADER's columns) of gases in the demo catalogue, at temperatures from `fromK`. */
+function cpRows(n: number, fromK = 300): string[] {
+  const lines: string[] = [];
+  for (let i = 0; i < n; i++) {
+    const [formula, name] = GASES[i % GASES.length];
+    const temperature = (fromK + Math.floor(i / GASES.length) * 0.05).toFixed(2);
+    lines.push(`${formula},${name},g,,Cp,${(30 + (i % 997) / 100).toFixed(2)},J/(mol·K),0.05,standard,,${temperature},100000,measured,,qpc-dsc07-2026,`);
+  }
+  return lines;
+}
+
 // Numbers are invented test inputs.
 describe('bulk import', () => {
   let t: TestApp;
@@ -121,6 +134,36 @@ describe('bulk import', () => {
     expect(await counts()).toEqual(before);
   });
 
+  it('finds species by synonym, and sees a new species clash with any species of that name or formula', async () => {
+    const csv = [
+      HEADER,
+      'H2O,Steam,g,,S,188.80,J/(mol·K),,,,298.15,100000,measured,,codata-1989,', // 2: water, by a synonym in other case
+      'C9H20,Marsh Gas,l,,S,250,J/(mol·K),,,,298.15,100000,measured,,codata-1989,', // 3: new species named as methane's synonym
+      'C10H22,ch3oh,l,,S,260,J/(mol·K),,,,298.15,100000,measured,,codata-1989,', // 4: new species named as methanol's formula
+    ].join('\n');
+    const res = await post('true', csv, 'names.csv', 'text/csv').expect(200);
+    const problems = res.body.errors as { line: number; field?: string; message: string }[];
+    expect(problems.filter((p) => p.line === 2)).toEqual([]);
+    expect(problems.filter((p) => p.line === 3).length).toBeGreaterThan(0);
+    for (const p of problems.filter((x) => x.line === 3)) {
+      expect(p).toEqual({ line: 3, field: 'name', message: '"Marsh Gas" names 2 species (Marsh Gas, C9H20; methane, CH4); give speciesId' });
+    }
+    expect(problems.filter((p) => p.line === 4).length).toBeGreaterThan(0);
+    for (const p of problems.filter((x) => x.line === 4)) {
+      expect(p).toEqual({ line: 4, field: 'name', message: jasmine.stringMatching(/^"ch3oh" names 2 species \(ch3oh, C10H22; methanol, CH4O\)/) });
+    }
+    expect(res.body.wouldCreate.species).toBe(2);
+  });
+
+  it('refuses a real import whose only problem is on its last line, writing nothing', async () => {
+    const rows = cpRows(2000, 1000);
+    const csv = [HEADER, ...rows, 'CH4,methane,g,,Cp,35.7,J/(mol·K),,,,298.15,100000,measured,,no-such-source-2026,'].join('\n');
+    const before = await counts();
+    const res = await post('false', csv, 'last-line.csv', 'text/csv').expect(422);
+    expect(res.body.details.problems).toEqual([jasmine.objectContaining({ line: rows.length + 2, field: 'sourceKey' })]);
+    expect(await counts()).toEqual(before);
+  });
+
   it('refuses what is not an import file', async () => {
     await post('true', 'hello', 'notes.txt', 'text/plain').expect(415);
     await post(undefined, badCsv, 'batch.csv', 'text/csv').expect(400);
@@ -151,33 +194,76 @@ describe('bulk import', () => {
     expect(proposal.items[5].payload).toEqual(jasmine.objectContaining({ levelOfTheory: 'G4', method: 'computed' }));
     const after = await counts();
     expect(after).toEqual({ ...before, proposals: before.proposals + 1, items: before.items + 7 });
+    // The reference columns the import wrote are those the proposal workflow resolves against the whole catalogue.
+    const columns = () => t.dataSource.query(
+      `SELECT id, position, kind, payload, source_id, species_id, species_phase_id, target_value_id, target_fit_id FROM proposal_items WHERE proposal_id = $1 ORDER BY position`,
+      [job.proposalId],
+    );
+    const written = await columns();
+    expect(written.map((i: { position: number }) => i.position)).toEqual([1, 2, 3, 4, 5, 6, 7]);
     // A draft: the steward submits it like any other; nothing enters the catalogue before approval.
     const submitted = await request(t.app).post(`/api/v1/proposals/${job.proposalId}/submit`).set('Authorization', steward).send({}).expect(200);
     expect(submitted.body.state).toBe('submitted');
+    expect(await columns()).toEqual(written);
   });
 });
 
-// 100 000 rows on a database of their own (the draft proposal they make is large).
-describe('bulk import of 100 000 rows', () => {
+// Large imports on a database of their own (the draft proposals they make are large).
+describe('bulk import of many rows', () => {
   let iso: IsolatedApp;
+  let steward: string;
+  const upload = (csv: string, filename: string) =>
+    request(iso.app).post('/api/v1/imports?dryRun=false').set('Authorization', steward).attach('file', Buffer.from(csv), { filename, contentType: 'text/csv' });
+  const totals = async () => (await iso.dataSource.query(`SELECT (SELECT count(*) FROM proposals)::int AS proposals, (SELECT count(*) FROM proposal_items)::int AS items`))[0];
+
   beforeAll(async () => {
     iso = await isolatedTestApp();
+    steward = await bearerFor(iso.app, 'steward');
   }, 60_000);
   afterAll(async () => {
     await iso?.close();
   });
 
-  it('goes into one draft proposal in one transaction, reporting progress', async () => {
-    const steward = await bearerFor(iso.app, 'steward');
-    const gases = [['H2O', 'water'], ['CO2', 'carbon dioxide'], ['CH4', 'methane'], ['N2', 'nitrogen'], ['O2', 'oxygen'], ['H2', 'hydrogen'], ['CO', 'carbon monoxide'], ['NH3', 'ammonia']];
-    const lines = [HEADER];
-    const n = 100_000;
-    for (let i = 0; i < n; i++) {
-      const [formula, name] = gases[i % gases.length];
-      const temperature = (300 + Math.floor(i / gases.length) * 0.05).toFixed(2);
-      lines.push(`${formula},${name},g,,Cp,${(30 + (i % 997) / 100).toFixed(2)},J/(mol·K),0.05,standard,,${temperature},100000,measured,,qpc-dsc07-2026,`);
+  it('writes all of 10 000 rows (two full statements) with their references, positions and text as given', async () => {
+    const notes = 'first line\nsecond line, a back\\slash and a\ttab';
+    const rows = cpRows(10_000).map((line) => `${line},`);
+    rows[0] = `${rows[0]}"${notes.replace(/"/g, '""')}"`;
+    const csv = [`${HEADER},notes`, ...rows].join('\n');
+    const started = await upload(csv, 'cp-10k.csv').expect(202);
+    const job = await finished(iso.app, steward, started.body.id);
+    expect(job).toEqual(jasmine.objectContaining({ status: 'succeeded', processedRows: 10_000, totalRows: 10_000 }));
+    const [stats] = await iso.dataSource.query(
+      `SELECT count(*)::int AS n, min(position)::int AS first, max(position)::int AS last, count(DISTINCT position)::int AS positions,
+              count(*) FILTER (WHERE i.kind = 'add_value' AND i.source_id IS NOT NULL AND sp.species_id = i.species_id AND (i.payload->>'speciesPhaseId')::uuid = i.species_phase_id)::int AS resolved
+         FROM proposal_items i LEFT JOIN species_phases sp ON sp.id = i.species_phase_id WHERE i.proposal_id = $1`,
+      [job.proposalId],
+    );
+    expect(stats).toEqual({ n: 10_000, first: 1, last: 10_000, positions: 10_000, resolved: 10_000 });
+    const [first] = await iso.dataSource.query(`SELECT payload FROM proposal_items WHERE proposal_id = $1 AND position = 1`, [job.proposalId]);
+    expect(first.payload).toEqual({
+      speciesPhaseId: jasmine.any(String), quantity: 'Cp', value: '30.00', unit: 'J/(mol·K)', uncertainty: '0.05', uncertaintyKind: 'standard',
+      temperatureK: 300, pressurePa: 100000, method: 'measured', notes,
+    });
+  }, 120_000);
+
+  it('writes nothing when the database refuses a row after the first statement went in', async () => {
+    const before = await totals();
+    // A constraint only this spec has: the rows after position 7000 (in the second COPY statement) are refused.
+    await iso.dataSource.query(`ALTER TABLE proposal_items ADD CONSTRAINT spec_refuses_late_positions CHECK (position <= 7000) NOT VALID`);
+    try {
+      const started = await upload([HEADER, ...cpRows(10_000, 2000)].join('\n'), 'cp-refused.csv').expect(202);
+      const job = await finished(iso.app, steward, started.body.id);
+      expect(job).toEqual(jasmine.objectContaining({ status: 'failed', proposalId: null, processedRows: 0 }));
+      expect(job.errors).toEqual([jasmine.objectContaining({ line: 0, message: jasmine.stringMatching(/^the import was rolled back: .*spec_refuses_late_positions/) })]);
+    } finally {
+      await iso.dataSource.query(`ALTER TABLE proposal_items DROP CONSTRAINT spec_refuses_late_positions`);
     }
-    const csv = lines.join('\n');
+    expect(await totals()).toEqual(before);
+  }, 120_000);
+
+  it('goes 100 000 rows into one draft proposal in one transaction, reporting progress', async () => {
+    const n = 100_000;
+    const csv = [HEADER, ...cpRows(n)].join('\n');
     const [{ n: valuesBefore }] = await iso.dataSource.query(`SELECT count(*)::int AS n FROM thermo_values`);
     const t0 = performance.now();
     const started = await request(iso.app).post('/api/v1/imports?dryRun=false').set('Authorization', steward).attach('file', Buffer.from(csv), { filename: 'cp-100k.csv', contentType: 'text/csv' }).expect(202);

@@ -1,15 +1,19 @@
 import type { Request } from 'express';
+import type { PoolClient } from 'pg';
+import type { EntityManager } from 'typeorm';
 import type { AppContext } from '../app-context';
 import type { Principal } from '../auth/principal';
 import { recordAudit } from '../audit/audit.service';
 import { CatalogueView } from '../proposals/proposal-subjects';
 import { NotFoundError, UnprocessableError, UnsupportedMediaTypeError } from '../shared/errors';
+import { copyLine, copyRows } from '../shared/copy-rows';
 import { safeFileName } from '../shared/uploads';
-import { decodeUtf8, parseCsv, parseXml, type ImportProblem } from './import-files';
-import { prepareImport, type ImportSources, type PreparedImport } from './import-rows';
+import { decodeUtf8, parseCsv, parseXml, type ImportProblem, type ImportRow } from './import-files';
+import { checkDraft, draftImport, importReferences, speciesNamesIn, type ImportSources, type PreparedImport } from './import-rows';
 
-/** Rows per multi-row INSERT (one jsonb parameter each) and per progress update. */
+/** Rows per COPY statement (its foreign-key checks run at its end) and per progress update. */
 const BATCH = 5000;
+const ITEM_COLUMNS = ['id', 'proposal_id', 'position', 'kind', 'payload', 'source_id', 'species_id', 'species_phase_id'] as const;
 /** Problems kept on the job row; the dry run's answer carries all of them. */
 const STORED_PROBLEMS = 10_000;
 export const MAX_IMPORT_ROWS = 200_000;
@@ -39,7 +43,7 @@ const JOB_COLUMNS = `id, file_name AS "fileName", format, dry_run AS "dryRun", s
  * Bulk import of values from CSV or XML (FORMAT.md). A dry run checks every row and answers every
  * problem with its line, writing nothing but the job record. A real import first checks the same
  * way (any problem: 422, nothing written), then creates ONE draft proposal with all its items in a
- * single transaction, in multi-row INSERTs of 5000, reporting progress on the job row through a
+ * single transaction, COPYed in statements of 5000 rows, reporting progress on the job row through a
  * second connection (the transaction's own writes stay invisible until it commits).
  */
 export class ImportsService {
@@ -60,10 +64,9 @@ export class ImportsService {
     if (parsed.rows.length > MAX_IMPORT_ROWS) problems.push({ line: 1, message: `at most ${MAX_IMPORT_ROWS} rows per file (this one has ${parsed.rows.length})` });
     if (parsed.rows.length === 0 && problems.length === 0) problems.push({ line: 1, message: 'the file holds no rows of values' });
 
-    const catalogue = await CatalogueView.load(this.ctx.dataSource.manager);
     const prepared = problems.length === 0 || parsed.rows.length > 0
-      ? prepareImport(parsed.rows, catalogue, await this.sources())
-      : { items: [], columns: new Map(), problems: [], counts: { species: 0, phases: 0, values: 0 } };
+      ? await this.prepare(parsed.rows)
+      : { items: [], columns: [], problems: [], counts: { species: 0, phases: 0, values: 0 } };
     problems.push(...prepared.problems);
     problems.sort((a, b) => a.line - b.line);
     const checkedMs = Date.now() - started;
@@ -97,9 +100,28 @@ export class ImportsService {
     return { status: 202, body: { ...(await this.get(user, job)), ...summary } };
   }
 
-  private async sources(): Promise<ImportSources> {
-    const rows: { id: string; shortKey: string; doi: string | null; mergedInto: string | null }[] = await this.ctx.dataSource.query(
-      `SELECT id, short_key AS "shortKey", doi, merged_into_id AS "mergedInto" FROM sources`,
+  /**
+   * Checks the rows against just the part of the catalogue they name: the species their formulas
+   * and names can mean, then the species the items name by name (those the import adds, to see
+   * clashes with species of other formulas).
+   */
+  private async prepare(rows: ImportRow[]): Promise<PreparedImport> {
+    const manager = this.ctx.dataSource.manager;
+    const references = importReferences(rows);
+    const catalogue = new CatalogueView();
+    const [sources] = await Promise.all([
+      this.sources(manager, references.sourceKeys, references.dois),
+      catalogue.loadSpeciesOfFormulas(manager, references),
+    ]);
+    const draft = draftImport(rows, references, catalogue, sources);
+    await catalogue.loadSpeciesNamed(manager, speciesNamesIn(draft));
+    return checkDraft(draft, catalogue);
+  }
+
+  private async sources(manager: EntityManager, keys: string[], dois: string[]): Promise<ImportSources> {
+    const rows: { id: string; shortKey: string; doi: string | null; mergedInto: string | null }[] = await manager.query(
+      `SELECT id, short_key AS "shortKey", doi, merged_into_id AS "mergedInto" FROM sources WHERE short_key = ANY($1::text[]) OR doi = ANY($2::text[])`,
+      [keys, dois],
     );
     const byKey = new Map<string, string>();
     const byDoi = new Map<string, string>();
@@ -112,9 +134,10 @@ export class ImportsService {
   }
 
   /**
-   * The one transaction of a real import: proposal, items in batches, audit; progress on the side.
-   * The items were checked against the catalogue a moment ago; a draft is checked again in full
-   * when it is submitted, and the database's foreign keys refuse anything that vanished meanwhile.
+   * The one transaction of a real import: proposal, items COPYed in statements of BATCH rows,
+   * audit; progress on the side. The items were checked against the catalogue a moment ago; a
+   * draft is checked again in full when it is submitted, and the database's foreign keys refuse
+   * anything that vanished meanwhile.
    */
   private async write(user: Principal, jobId: string, title: string, prepared: PreparedImport, rows: number, req: Request): Promise<void> {
     const items = prepared.items;
@@ -124,22 +147,15 @@ export class ImportsService {
         `INSERT INTO proposals (title, summary, author_id) VALUES ($1, $2, $3) RETURNING id`,
         [title.slice(0, 300), `Created by bulk import ${jobId}.`, user.userId],
       );
-      for (let i = 0; i < total; i += BATCH) {
-        const batch = items.slice(i, i + BATCH).map((item) => {
-          const cols = prepared.columns.get(item.id);
-          return {
-            id: item.id, position: item.position, kind: item.kind, payload: item.payload, source_id: item.sourceId,
-            species_id: cols?.speciesId ?? null, species_phase_id: cols?.speciesPhaseId ?? null,
-          };
-        });
-        await m.query(
-          `INSERT INTO proposal_items (id, proposal_id, position, kind, payload, source_id, species_id, species_phase_id)
-           SELECT x.id, $1, x.position, x.kind, x.payload, x.source_id, x.species_id, x.species_phase_id
-             FROM jsonb_to_recordset($2::jsonb) AS x(id uuid, position integer, kind text, payload jsonb, source_id uuid, species_id uuid, species_phase_id uuid)`,
-          [proposal.id, JSON.stringify(batch)],
-        );
-        await this.progress(jobId, Math.floor((rows * Math.min(i + BATCH, total)) / total));
+      function* lines(): Generator<string> {
+        for (const [i, item] of items.entries()) {
+          const cols = prepared.columns[i];
+          yield copyLine([item.id, proposal.id, item.position, item.kind, item.payload, item.sourceId, cols.speciesId, cols.speciesPhaseId]);
+        }
       }
+      // The transaction's own connection: COPY runs in the same transaction as everything else here.
+      const client = (await m.queryRunner!.connect()) as PoolClient;
+      await copyRows(client, 'proposal_items', ITEM_COLUMNS, lines(), BATCH, (written) => this.progress(jobId, Math.floor((rows * written) / total)));
       await recordAudit(m, { action: 'proposal.create', actor: user, entityType: 'proposal', entityId: proposal.id, details: { title, importJobId: jobId, items: total } }, req);
       return proposal.id as string;
     });

@@ -66,7 +66,13 @@ export interface CatalogueFit {
   ranges: unknown;
 }
 
-/** The species and phases of the catalogue, and the values and fits items point at. */
+const SPECIES_COLUMNS = `id, formula, hill_formula AS "hillFormula", charge, name, synonyms, composition, cas_rn AS "casRn", inchikey`;
+const PHASE_COLUMNS = `id, species_id AS "speciesId", phase, polymorph, is_reference_state AS "isReferenceState"`;
+
+/**
+ * The species and phases of the catalogue, and the values and fits items point at: all of them
+ * (`load`), or only those some items can name (a new view filled by the `loadSpecies…` methods).
+ */
 export class CatalogueView {
   readonly speciesById = new Map<string, CatalogueSpecies>();
   readonly phaseById = new Map<string, CataloguePhase>();
@@ -77,17 +83,57 @@ export class CatalogueView {
 
   static async load(manager: EntityManager, refs: { valueIds?: string[]; fitIds?: string[] } = {}): Promise<CatalogueView> {
     const view = new CatalogueView();
-    const species: CatalogueSpecies[] = await manager.query(
-      `SELECT id, formula, hill_formula AS "hillFormula", charge, name, synonyms, composition, cas_rn AS "casRn", inchikey FROM species`,
-    );
+    const species: CatalogueSpecies[] = await manager.query(`SELECT ${SPECIES_COLUMNS} FROM species`);
     for (const s of species) view.addSpecies(s);
-    const phases: CataloguePhase[] = await manager.query(
-      `SELECT id, species_id AS "speciesId", phase, polymorph, is_reference_state AS "isReferenceState" FROM species_phases`,
-    );
+    const phases: CataloguePhase[] = await manager.query(`SELECT ${PHASE_COLUMNS} FROM species_phases`);
     for (const p of phases) view.addPhase(p);
     await view.loadValues(manager, refs.valueIds ?? []);
     await view.loadFits(manager, refs.fitIds ?? []);
     return view;
+  }
+
+  /**
+   * Adds, with all their phases, the species of some Hill formulas (any charge; as `hillFormula`
+   * writes them): all of them for `hillFormulas`, and for `namedHillFormulas` those whose name or
+   * a synonym is one of `names`, case ignored. What an import needs to match its rows' formulas
+   * and names.
+   */
+  async loadSpeciesOfFormulas(manager: EntityManager, wanted: { hillFormulas: string[]; namedHillFormulas: string[]; names: string[] }): Promise<void> {
+    if (wanted.hillFormulas.length === 0 && wanted.namedHillFormulas.length === 0) return;
+    await this.loadSpeciesWhere(
+      manager,
+      `SELECT id FROM species WHERE hill_formula = ANY($1::text[])
+       UNION ALL SELECT id FROM species WHERE hill_formula = ANY($2::text[]) AND lower(name) = ANY($3::text[])
+       UNION ALL SELECT x.id FROM species x CROSS JOIN LATERAL unnest(x.synonyms) AS synonym WHERE x.hill_formula = ANY($2::text[]) AND lower(synonym) = ANY($3::text[])`,
+      [[...new Set(wanted.hillFormulas)], [...new Set(wanted.namedHillFormulas)], caseKeys(wanted.names)],
+    );
+  }
+
+  /**
+   * Adds, with all their phases, every species that `speciesNamed` could answer for these texts
+   * (name, formula or synonym; case and surrounding spaces ignored).
+   */
+  async loadSpeciesNamed(manager: EntityManager, texts: string[]): Promise<void> {
+    if (texts.length === 0) return;
+    await this.loadSpeciesWhere(
+      manager,
+      `SELECT id FROM species WHERE lower(btrim(name)) = ANY($1::text[]) OR lower(btrim(formula)) = ANY($1::text[])
+       UNION ALL SELECT x.id FROM species x CROSS JOIN LATERAL unnest(x.synonyms) AS synonym WHERE lower(btrim(synonym)) = ANY($1::text[])`,
+      [caseKeys(texts.map((t) => t.trim()))],
+    );
+  }
+
+  /**
+   * Adds the species whose ids `idQuery` selects (in a form PostgreSQL runs without a per-row
+   * subplan: its array comparisons are hashed), and all their phases.
+   */
+  private async loadSpeciesWhere(manager: EntityManager, idQuery: string, parameters: unknown[]): Promise<void> {
+    const species: CatalogueSpecies[] = await manager.query(`SELECT ${SPECIES_COLUMNS} FROM species WHERE id IN (${idQuery})`, parameters);
+    const added = species.filter((s) => !this.speciesById.has(s.id));
+    for (const s of added) this.addSpecies(s);
+    if (added.length === 0) return;
+    const phases: CataloguePhase[] = await manager.query(`SELECT ${PHASE_COLUMNS} FROM species_phases WHERE species_id = ANY($1::uuid[])`, [added.map((s) => s.id)]);
+    for (const p of phases) this.addPhase(p);
   }
 
   async loadValues(manager: EntityManager, ids: string[]): Promise<void> {
@@ -149,6 +195,15 @@ export class CatalogueView {
 }
 
 const nameKey = (text: string) => text.trim().toLowerCase();
+
+/**
+ * Texts to compare with PostgreSQL's `lower(…)` of names: each as JavaScript lowers it (as
+ * `nameKey` does), the two agreeing on the letters names are written in, and as given, for a
+ * character that one of them leaves as it is.
+ */
+function caseKeys(texts: string[]): string[] {
+  return [...new Set(texts.flatMap((t) => [t.toLowerCase(), t]))];
+}
 
 function speciesKeys(name: string, formula: string, synonyms: string[]): string[] {
   return [name, formula, ...synonyms].map(nameKey);

@@ -41,9 +41,13 @@ export function copyLine(fields: readonly unknown[]): string {
 
 /**
  * COPYs the lines into `table (columns)`, `rowsPerStatement` rows per COPY statement, on the
- * caller's connection (and so in its transaction). Returns the number of rows.
+ * caller's connection (and so in its transaction); `afterStatement` hears the rows written so far
+ * after each statement (its foreign-key checks included). Returns the number of rows.
  */
-export async function copyRows(client: ClientBase, table: string, columns: readonly string[], lines: Iterable<string>, rowsPerStatement = 100_000): Promise<number> {
+export async function copyRows(
+  client: ClientBase, table: string, columns: readonly string[], lines: Iterable<string>, rowsPerStatement = 100_000,
+  afterStatement?: (rowsWritten: number) => Promise<void>,
+): Promise<number> {
   const iterator = lines[Symbol.iterator]();
   let total = 0;
   let finished = false;
@@ -73,6 +77,7 @@ export async function copyRows(client: ClientBase, table: string, columns: reado
     const stream = client.query(copyFrom(`COPY ${table} (${columns.join(', ')}) FROM STDIN`));
     await pipeline(Readable.from(chunks(), { objectMode: false }), stream);
     total += inStatement;
+    if (afterStatement) await afterStatement(total);
   }
   return total;
 }
