@@ -128,7 +128,8 @@ async function main(): Promise<void> {
     const captureFile = path.join(os.tmpdir(), `kelvindex-bench-capture-${process.pid}.jsonl`);
     writeFileSync(captureFile, '');
     console.log(`\nCalibrating (API with statement capture, ${CALIBRATION_REQUESTS} requests per benchmark, release ${release.label})…`);
-    api = await startApi(bench.url, { captureFile });
+    // Without the answer cache, so that every calibrated request records the SQL it costs when computed.
+    api = await startApi(bench.url, { captureFile, env: { RESPONSE_CACHE_MB: '0' } });
     const calibrated: Calibrated[] = [];
     for (const scenario of scenarios) {
       await calibrate(api, captureFile, { ...scenario, requests: scenario.requests.slice(0, 20) }); // warm caches first

@@ -21,7 +21,10 @@ export type CapturedRequest = CapturedStatement[];
  * prepares them), no HTTP, no JSON, no engine.
  * Returns the stats and the mean time of each statement position (to see which one dominates).
  */
-export async function sqlLoad(url: string, requests: CapturedRequest[], connections: number, seconds: number): Promise<LoadStats & { statementMeanMs: number[] }> {
+export async function sqlLoad(url: string, captured: CapturedRequest[], connections: number, seconds: number): Promise<LoadStats & { statementMeanMs: number[] }> {
+  // A request that sent no SQL (answered from a cache) says nothing about the database's side.
+  const requests = captured.filter((r) => r.length > 0);
+  if (requests.length === 0) return { ...loadStats([], connections, seconds, 0), statementMeanMs: [] };
   const clients = await Promise.all(Array.from({ length: connections }, async () => {
     const client = new Client({ connectionString: url });
     await client.connect();
