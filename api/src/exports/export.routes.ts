@@ -41,19 +41,25 @@ export function exportRoutes(ctx: AppContext) {
       }
     }
     const kind = format === 'nasa7' ? 'nasa7' : 'all';
-    const sources = await exports.sources(release, options, kind);
-    const cursor = await (kind === 'nasa7' ? exports.nasa7(release, options) : exports.rows(release, options));
-    res.set('Content-Type', CONTENT_TYPES[format]);
-    res.set('Content-Disposition', `attachment; filename="kelvindex-${release.label}.${FILE_EXTENSIONS[format]}"`);
-    res.set('X-Kelvindex-Release', release.label);
-    // No generation time: an export of a published release is the same bytes forever (ETags, backups).
-    const header = { release: { label: release.label, status: release.status, publishedAt: release.publishedAt }, query, sources };
+    const cursor = await (kind === 'nasa7' ? exports.nasa7(release, options) : format === 'csv' ? exports.csvRows(release, options) : exports.rows(release, options));
     try {
+      // Ask for the first rows now: the database sorts the export while the header's sources are
+      // looked up. A failure meanwhile is thrown below (or by the pipeline, once it runs).
+      cursor.stream.on('error', () => undefined).read(0);
+      const sources = await exports.sources(release, options, kind);
+      if (cursor.stream.errored) throw cursor.stream.errored;
+      res.set('Content-Type', CONTENT_TYPES[format]);
+      res.set('Content-Disposition', `attachment; filename="kelvindex-${release.label}.${FILE_EXTENSIONS[format]}"`);
+      res.set('X-Kelvindex-Release', release.label);
+      // No generation time: an export of a published release is the same bytes forever (ETags, backups).
+      const header = { release: { label: release.label, status: release.status, publishedAt: release.publishedAt }, query, sources };
       await pipeline([cursor.stream, ...stagesFor(format, header), res]);
     } catch (error) {
+      // The client went away (before or during the answer): there is no one to tell.
+      if ((error as NodeJS.ErrnoException).code === 'ERR_STREAM_PREMATURE_CLOSE') return;
       // Headers are gone once the first bytes are: a failure mid-stream can only cut the answer short.
       if (!res.headersSent) throw error;
-      if (!res.destroyed && (error as NodeJS.ErrnoException).code !== 'ERR_STREAM_PREMATURE_CLOSE') {
+      if (!res.destroyed) {
         console.error(error);
         res.destroy(error as Error);
       }

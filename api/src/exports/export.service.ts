@@ -1,13 +1,15 @@
 import { createHash } from 'node:crypto';
 import type { Readable } from 'node:stream';
 import type { PoolClient } from 'pg';
-import QueryStream from 'pg-query-stream';
+import type QueryStream from 'pg-query-stream';
 import type { DataSource } from 'typeorm';
 import type { ResolvedRelease } from '../releases/release-resolution';
-import { speciesConditions, type SpeciesFilter } from '../species/species-filter';
+import { releaseMembership, speciesMatch, type SpeciesFilter } from '../species/species-filter';
 import { SOURCE_COLUMNS, sourceRef, type SourceRef } from '../species/species.service';
 import { APP_VERSION } from '../version';
 import { citedSourceJoin } from '../sources/cited-source';
+import { CSV_FIELD_TYPES } from './csv-field-types';
+import { PortalStream } from './portal-stream';
 
 export interface ExportOptions {
   filter: SpeciesFilter;
@@ -77,23 +79,35 @@ export interface Nasa7Row {
 
 const PHASE_ORDER = `array_position(ARRAY['cr','am','l','g','aq','aq,inf']::text[], sp.phase)`;
 
-/** A cursor over an export query; `done()` gives its connection back (call it once the stream ends). */
+/** A cursor over an export query; `done()` closes it and gives its connection back (call it once, at the end). */
 export interface ExportCursor {
   stream: Readable;
   done(): Promise<void>;
 }
 
+/** Rows an export's stream holds before it pauses the database's socket. */
+const BUFFERED_ROWS = 200;
+/** Header source lists kept (published releases only; one per release, format kind and filters). */
+const MAX_CACHED_SOURCE_LISTS = 200;
+
 /**
- * Exports read straight from a database cursor (pg-query-stream), a batch of rows at a time, so
- * memory stays flat however large the release.
+ * Exports read straight from the database as the rows come (PortalStream), so memory stays flat
+ * however large the release.
  */
 export class ExportService {
+  /** The header's sources of exports of published releases, by release, kind, filters and the last change to species and sources. */
+  private readonly publishedSources = new Map<string, Promise<SourceRef[]>>();
+
   constructor(private readonly dataSource: DataSource) {}
 
   /** FROM … WHERE for the members of the species the filters select, in release `$1`. */
   private membersOf(release: ResolvedRelease, options: ExportOptions, kind: 'all' | 'nasa7'): { sql: string; params: unknown[] } {
     const params: unknown[] = [release.id];
-    const { where } = speciesConditions(options.filter, params, '$1');
+    // The joined member m belongs to release $1 and carries the phase (and quantity) asked for, so
+    // the species holds data there: no per-species membership test (EXISTS) as a search needs. A
+    // NASA-7 export's members are fits, so a quantity filter still asks which species hold one.
+    const { conditions } = speciesMatch(options.filter, params);
+    if (kind === 'nasa7' && options.filter.quantity) conditions.push(releaseMembership(options.filter, params, '$1'));
     const memberConditions = ['m.release_id = $1'];
     const p = (value: unknown) => `$${params.push(value)}`;
     if (options.filter.phase) {
@@ -113,27 +127,58 @@ export class ExportService {
             LEFT JOIN thermo_values v ON v.id = m.value_id
             LEFT JOIN heat_capacity_fits f ON f.id = m.fit_id
             ${citedSourceJoin('coalesce(v.source_id, f.source_id)')}
-           WHERE ${where} AND ${memberConditions.join(' AND ')}`,
+           WHERE ${[...conditions, ...memberConditions].join(' AND ')}`,
       params,
     };
   }
 
-  /** The sources every exported row cites, for the export's header. */
+  /**
+   * The sources every exported row cites, for the export's header. For a published release the
+   * list is computed once (its members never change) and kept while no species or source record
+   * changes (names and merges decide which species match and which source a row shows).
+   */
   async sources(release: ResolvedRelease, options: ExportOptions, kind: 'all' | 'nasa7'): Promise<SourceRef[]> {
-    const { sql, params } = this.membersOf(release, options, kind);
-    const rows = await this.dataSource.query(
-      `SELECT ${SOURCE_COLUMNS} FROM sources src WHERE src.id IN (SELECT src.id ${sql}) ORDER BY src.short_key`,
-      params,
-    );
-    return rows.map(sourceRef);
+    if (release.status !== 'published') return this.citedSources(release, options, kind);
+    const key = JSON.stringify([release.id, kind, options, await this.lastChange()]);
+    let sources = this.publishedSources.get(key);
+    if (!sources) {
+      if (this.publishedSources.size >= MAX_CACHED_SOURCE_LISTS) this.publishedSources.delete(this.publishedSources.keys().next().value!);
+      sources = this.citedSources(release, options, kind);
+      this.publishedSources.set(key, sources);
+      sources.catch(() => this.publishedSources.delete(key));
+    }
+    return sources;
   }
 
   /**
-   * A weak validator for an export: the release, the query, the code version and the last change
-   * to the mutable records an export shows (species names and identifiers, source records).
+   * The sources the selected members cite. For a whole release, one probe per source instead of a
+   * join of all its members: does a value or fit of the release cite it (found through the
+   * source_id indexes)? A fraction of a second where the join takes seconds, while the export's own
+   * query sorts on the other core. (With filters, a source many members cite but none selected ones
+   * would be probed through all its members: there the join is the cheaper.)
    */
-  async etag(release: ResolvedRelease, query: string): Promise<string> {
+  private async citedSources(release: ResolvedRelease, options: ExportOptions, kind: 'all' | 'nasa7'): Promise<SourceRef[]> {
+    const { filter } = options;
+    const wholeRelease = kind === 'all' && !options.recommendedOnly && !filter.phase && !filter.quantity && speciesMatch(filter, []).conditions.length === 0;
+    const { sql, params } = this.membersOf(release, options, kind);
+    const cited = wholeRelease
+      ? `SELECT coalesce(c.merged_into_id, c.id) FROM sources c
+          WHERE EXISTS (SELECT 1 FROM thermo_values v JOIN release_members m ON m.value_id = v.id WHERE v.source_id = c.id AND m.release_id = $1)
+             OR EXISTS (SELECT 1 FROM heat_capacity_fits f JOIN release_members m ON m.fit_id = f.id WHERE f.source_id = c.id AND m.release_id = $1)`
+      : `SELECT src.id ${sql}`;
+    const rows = await this.dataSource.query(`SELECT ${SOURCE_COLUMNS} FROM sources src WHERE src.id IN (${cited}) ORDER BY src.short_key`, params);
+    return rows.map(sourceRef);
+  }
+
+  /** The last change to the mutable records an export shows (species names and identifiers, source records). */
+  private async lastChange(): Promise<{ species: Date | null; sources: Date | null }> {
     const [stamp] = await this.dataSource.query(`SELECT (SELECT max(updated_at) FROM species) AS species, (SELECT max(updated_at) FROM sources) AS sources`);
+    return stamp;
+  }
+
+  /** A weak validator for an export: the release, the query, the code version and the last change to species and sources. */
+  async etag(release: ResolvedRelease, query: string): Promise<string> {
+    const stamp = await this.lastChange();
     const hash = createHash('sha256')
       .update(JSON.stringify([release.id, release.status, release.publishedAt, query, APP_VERSION, stamp.species, stamp.sources]))
       .digest('base64url')
@@ -145,6 +190,15 @@ export class ExportService {
   rows(release: ResolvedRelease, options: ExportOptions): Promise<ExportCursor> {
     const { sql, params } = this.rowsQuery(release, options);
     return this.cursor(sql, params);
+  }
+
+  /**
+   * The rows of `rows` for CSV: arrays in EXPORT_COLUMNS order, numbers and booleans as the text
+   * the CSV shows (csv-field-types.ts), JSON as objects.
+   */
+  csvRows(release: ResolvedRelease, options: ExportOptions): Promise<ExportCursor> {
+    const { sql, params } = this.rowsQuery(release, options);
+    return this.cursor(sql, params, { rowMode: 'array', types: CSV_FIELD_TYPES });
   }
 
   /** The SQL of `rows` (the benchmark compares it with PostgreSQL's own COPY of the same rows). */
@@ -181,17 +235,20 @@ export class ExportService {
     );
   }
 
-  private async cursor(sql: string, params: unknown[]): Promise<ExportCursor> {
+  private async cursor(sql: string, params: unknown[], config: Pick<QueryStream.Config, 'rowMode' | 'types'> = {}): Promise<ExportCursor> {
     // A replica when one is configured: an export is a long read.
     const runner = this.dataSource.createQueryRunner('slave');
     const client = (await runner.connect()) as PoolClient;
-    const stream = client.query(new QueryStream(sql, params, { batchSize: 1000, highWaterMark: 1000 }));
+    const stream = client.query(new PortalStream(sql, params, { ...config, bufferedRows: BUFFERED_ROWS }));
     let released = false;
     return {
       stream,
       done: async () => {
         if (released) return;
         released = true;
+        if (!stream.destroyed) stream.destroy();
+        // Rows may still be on their way: end the connection (PostgreSQL stops the query with it).
+        if (stream.abandoned) await client.end();
         await runner.release();
       },
     };

@@ -115,6 +115,11 @@ function likePattern(text: string): string {
   return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
 
+/** Appends `value` to the query's parameters; returns its placeholder (`$n`). */
+function placeholder(params: unknown[], value: unknown): string {
+  return `$${params.push(value)}`;
+}
+
 /** SQL conditions on `species s` with positional parameters appended to `params`. */
 export interface SpeciesConditions {
   where: string;
@@ -127,10 +132,17 @@ export interface SpeciesConditions {
  * (with the phase and quantity asked for, when asked).
  */
 export function speciesConditions(filter: SpeciesFilter, params: unknown[], releaseParam: string): SpeciesConditions {
-  const p = (value: unknown) => {
-    params.push(value);
-    return `$${params.length}`;
-  };
+  const { conditions, rank } = speciesMatch(filter, params);
+  conditions.push(releaseMembership(filter, params, releaseParam));
+  return { where: conditions.join(' AND '), rank };
+}
+
+/**
+ * The conditions on `species s` itself (text, formula, elements), without release membership:
+ * for a query that joins the release's members itself and puts the phase and quantity on them.
+ */
+export function speciesMatch(filter: SpeciesFilter, params: unknown[]): { conditions: string[]; rank: string | null } {
+  const p = (value: unknown) => placeholder(params, value);
   const conditions: string[] = [];
   let rank: string | null = null;
   if (filter.q !== undefined) {
@@ -169,14 +181,19 @@ export function speciesConditions(filter: SpeciesFilter, params: unknown[], rele
       ? `s.element_symbols <@ ${symbols} AND cardinality(s.element_symbols) > 0`
       : `s.element_symbols @> ${symbols}`);
   }
+  return { conditions, rank };
+}
+
+/** EXISTS: species `s` holds data in release `releaseParam`, with the phase and quantity asked for. */
+export function releaseMembership(filter: SpeciesFilter, params: unknown[], releaseParam: string): string {
+  const p = (value: unknown) => placeholder(params, value);
   const member = [`sp.species_id = s.id`, `m.release_id = ${releaseParam}`];
   if (filter.phase) {
     member.push(`sp.phase = ${p(filter.phase.phase)}`);
     if (filter.phase.polymorph !== null) member.push(`sp.polymorph = ${p(filter.phase.polymorph)}`);
   }
   if (filter.quantity) member.push(`m.quantity = ${p(filter.quantity)}`);
-  conditions.push(`EXISTS (SELECT 1 FROM species_phases sp JOIN release_members m ON m.species_phase_id = sp.id WHERE ${member.join(' AND ')})`);
-  return { where: conditions.join(' AND '), rank };
+  return `EXISTS (SELECT 1 FROM species_phases sp JOIN release_members m ON m.species_phase_id = sp.id WHERE ${member.join(' AND ')})`;
 }
 
 /**
