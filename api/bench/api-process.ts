@@ -42,6 +42,8 @@ export async function startApi(databaseUrl: string, options: { captureFile?: str
     env.KELVINDEX_BENCH_CAPTURE = options.captureFile;
     args.unshift('--require', path.join(root, 'dist/server/api/bench/statement-capture.js'));
   }
+  // A CPU profile of the API, written when it stops (open it in Chrome's DevTools).
+  if (process.env.KELVINDEX_BENCH_PROFILE_DIR) args.unshift('--cpu-prof', `--cpu-prof-dir=${process.env.KELVINDEX_BENCH_PROFILE_DIR}`);
   const child = spawn(process.execPath, args, { cwd: root, env, stdio: ['ignore', 'pipe', 'pipe'] });
   let output = '';
   child.stdout!.on('data', (chunk: Buffer) => (output += chunk.toString()));

@@ -46,7 +46,7 @@ export function copyLine(fields: readonly unknown[]): string {
  */
 export async function copyRows(
   client: ClientBase, table: string, columns: readonly string[], lines: Iterable<string>, rowsPerStatement = 100_000,
-  afterStatement?: (rowsWritten: number) => Promise<void>,
+  afterStatement?: (rowsWritten: number) => void | Promise<void>,
 ): Promise<number> {
   const iterator = lines[Symbol.iterator]();
   let total = 0;
