@@ -74,6 +74,9 @@ export async function importBench(api: ApiProcess, databaseUrl: string, rows: nu
   const client = new Client({ connectionString: databaseUrl });
   await client.connect();
   try {
+    // Earlier runs leave dead rows (their drafts are deleted, the COPY baselines rolled back): clear
+    // them first, so that autovacuum does not start in the middle of this run.
+    await client.query('VACUUM ANALYZE proposal_items');
     const { key, userId } = await stewardKey(client);
     const csv = await importCsv(client, rows);
     const form = new FormData();

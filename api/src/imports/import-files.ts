@@ -1,3 +1,4 @@
+import { isUtf8 } from 'node:buffer';
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
 
 /**
@@ -49,13 +50,9 @@ function columnFor(header: string): ImportColumn | undefined {
 
 /** A decoded file's text: UTF-8 only (a BOM is dropped); anything else is a problem at line 1. */
 export function decodeUtf8(bytes: Buffer): { text: string } | { problem: ImportProblem } {
-  try {
-    const text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
-    if (text.includes('\u0000')) return { problem: { line: 1, message: 'the file holds NUL bytes: it is not a text file' } };
-    return { text };
-  } catch {
-    return { problem: { line: 1, message: 'the file is not UTF-8 text' } };
-  }
+  if (!isUtf8(bytes)) return { problem: { line: 1, message: 'the file is not UTF-8 text' } };
+  if (bytes.includes(0)) return { problem: { line: 1, message: 'the file holds NUL bytes: it is not a text file' } };
+  return { text: bytes.toString('utf8') };
 }
 
 /**
@@ -99,6 +96,10 @@ export function parseCsv(text: string): ParsedFile {
   return { rows, problems, records: records.length };
 }
 
+const COMMA = 44;
+const LF = 10;
+const CR = 13;
+
 /** Records with the line each starts on; blank and # lines dropped. Fields are sliced, not built char by char. */
 function splitCsv(text: string, problems: ImportProblem[]): { line: number; fields: string[] }[] {
   const records: { line: number; fields: string[] }[] = [];
@@ -106,7 +107,10 @@ function splitCsv(text: string, problems: ImportProblem[]): { line: number; fiel
   const n = source.length;
   let line = 1;
   let i = 0;
-  const endOfLine = (at: number) => source[at] === '\n' || (source[at] === '\r' && source[at + 1] === '\n');
+  const endOfLine = (at: number) => {
+    const c = source.charCodeAt(at);
+    return c === LF || (c === CR && source.charCodeAt(at + 1) === LF);
+  };
   while (i < n) {
     if (endOfLine(i)) {
       i += source[i] === '\r' ? 2 : 1;
@@ -150,12 +154,12 @@ function splitCsv(text: string, problems: ImportProblem[]): { line: number; fiel
         i = from;
         // Anything between the closing quote and the delimiter is kept, as RFC 4180 readers do.
         let stop = i;
-        while (stop < n && source[stop] !== ',' && !endOfLine(stop)) stop++;
+        while (stop < n && source.charCodeAt(stop) !== COMMA && !endOfLine(stop)) stop++;
         fields.push(value + source.slice(i, stop));
         i = stop;
       } else {
         let stop = i;
-        while (stop < n && source[stop] !== ',' && !endOfLine(stop)) stop++;
+        for (let c = source.charCodeAt(stop); stop < n && c !== COMMA && c !== LF && !(c === CR && source.charCodeAt(stop + 1) === LF); c = source.charCodeAt(++stop));
         const value = source.slice(i, stop);
         if (value.includes('"')) problems.push({ line, message: 'a double quote inside an unquoted field: quote the whole field and double the quote ("")' });
         fields.push(value);

@@ -3,7 +3,7 @@ import { hillFormula } from '../thermo/formula-format';
 import { tryParseFormula } from '../thermo/formula';
 import { normalizeDoi } from '../sources/doi';
 import { PHASE_CODES, type PhaseCode } from '../species/phase-code';
-import { itemColumns, resolveItems, type CatalogueSpecies, type CatalogueView, type ItemInput } from '../proposals/proposal-subjects';
+import { itemColumns, newResolutionState, resolveItems, type CatalogueSpecies, type CatalogueView, type ItemInput, type ResolutionState } from '../proposals/proposal-subjects';
 import type { Quantity } from '../values/value-vocabulary';
 import type { ImportProblem, ImportRow } from './import-files';
 
@@ -54,7 +54,7 @@ export interface ImportReferences {
 
 /** The rows as items, before their subjects are resolved against the catalogue. */
 export interface DraftImport {
-  /** in position order: items[i] has position i + 1 */
+  /** in position order: items[i] has position items[0].position + i */
   items: ItemInput[];
   /** lines[i]: the line items[i] comes from */
   lines: number[];
@@ -69,6 +69,23 @@ export interface PreparedImport {
   columns: ReturnType<typeof itemColumns>[];
   problems: ImportProblem[];
   counts: { species: number; phases: number; values: number };
+}
+
+/**
+ * What checking remembers from one part of a file to the next, so that a long file can be checked
+ * (and written) in parts: the species and phases it adds, the next position, the values seen.
+ */
+export interface ImportState {
+  newSpecies: Map<string, { item: ItemInput; line: number }>;
+  newPhases: Map<string, { item: ItemInput; line: number }>;
+  nextPosition: number;
+  resolution: ResolutionState;
+  /** duplicate key → the line that first gave it */
+  seen: Map<string, number>;
+}
+
+export function newImportState(): ImportState {
+  return { newSpecies: new Map(), newPhases: new Map(), nextPosition: 1, resolution: newResolutionState(), seen: new Map() };
 }
 
 /** "100000", "1e5 Pa", "100 kPa", "1 bar", "1 atm", "101.325 kPa" → Pa; undefined when unreadable. */
@@ -148,9 +165,11 @@ export function speciesNamesIn(draft: DraftImport): string[] {
 
 /**
  * Every row checked and made an item. `catalogue` must hold at least the species the rows'
- * formulas and names can mean (`references`), `sources` at least the sources they name.
+ * formulas and names can mean (`references`), `sources` at least the sources they name. Rows in
+ * parts: one `state` for all parts, each part drafted and checked before the next is drafted; a
+ * part's items then hold the species and phases first needed in it, then its values.
  */
-export function draftImport(rows: ImportRow[], references: ImportReferences, catalogue: CatalogueView, sources: ImportSources): DraftImport {
+export function draftImport(rows: ImportRow[], references: ImportReferences, catalogue: CatalogueView, sources: ImportSources, state = newImportState()): DraftImport {
   const problems: ImportProblem[] = [];
   const byHill = new Map<string, CatalogueSpecies[]>();
   for (const s of catalogue.speciesById.values()) {
@@ -159,8 +178,9 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
     if (group) group.push(s);
     else byHill.set(key, [s]);
   }
-  const newSpecies = new Map<string, { item: ItemInput; line: number }>();
-  const newPhases = new Map<string, { item: ItemInput; line: number }>();
+  const { newSpecies, newPhases } = state;
+  const speciesBefore = newSpecies.size;
+  const phasesBefore = newPhases.size;
   const valueItems: DraftImport['values'] = [];
   const { formulas } = references;
 
@@ -261,11 +281,15 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
     valueItems.push({ item: { id: randomUUID(), position: 0, kind: 'add_value', payload, sourceId: sourceId ?? null }, line: row.line, duplicateKey, what: `${quantity}${f.transition ? ` (${f.transition})` : ''}` });
   }
 
-  const ordered = [...newSpecies.values(), ...newPhases.values(), ...valueItems];
+  const ordered = [...[...newSpecies.values()].slice(speciesBefore), ...[...newPhases.values()].slice(phasesBefore), ...valueItems];
   ordered.forEach((entry, index) => {
-    entry.item.position = index + 1;
+    entry.item.position = state.nextPosition + index;
   });
-  return { items: ordered.map((e) => e.item), lines: ordered.map((e) => e.line), values: valueItems, problems, counts: { species: newSpecies.size, phases: newPhases.size, values: valueItems.length } };
+  state.nextPosition += ordered.length;
+  return {
+    items: ordered.map((e) => e.item), lines: ordered.map((e) => e.line), values: valueItems, problems,
+    counts: { species: newSpecies.size - speciesBefore, phases: newPhases.size - phasesBefore, values: valueItems.length },
+  };
 }
 
 /**
@@ -273,12 +297,13 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
  * the rows' lines, and repeated values found. `catalogue` must also hold the species named in
  * `speciesNamesIn(draft)`.
  */
-export function checkDraft(draft: DraftImport, catalogue: CatalogueView): PreparedImport {
+export function checkDraft(draft: DraftImport, catalogue: CatalogueView, state = newImportState()): PreparedImport {
   const problems = [...draft.problems];
   const withProblems: boolean[] = [];
   const columns: PreparedImport['columns'] = [];
-  for (const resolved of resolveItems(draft.items, catalogue)) {
-    const index = resolved.item.position - 1;
+  const firstPosition = draft.items[0]?.position ?? 1;
+  for (const resolved of resolveItems(draft.items, catalogue, state.resolution)) {
+    const index = resolved.item.position - firstPosition;
     columns[index] = itemColumns(resolved);
     for (const p of resolved.problems) {
       problems.push({ line: draft.lines[index], field: COLUMN_OF[p.field] ?? p.field, message: p.message });
@@ -286,9 +311,9 @@ export function checkDraft(draft: DraftImport, catalogue: CatalogueView): Prepar
     }
   }
   // Repeats among the rows that are otherwise fine.
-  const seen = new Map<string, number>();
+  const { seen } = state;
   for (const v of draft.values) {
-    if (withProblems[v.item.position - 1]) continue;
+    if (withProblems[v.item.position - firstPosition]) continue;
     const first = seen.get(v.duplicateKey);
     if (first !== undefined) problems.push({ line: v.line, field: 'quantity', message: `line ${first} already gives ${v.what} of this species phase from the same source at the same temperature` });
     else seen.set(v.duplicateKey, v.line);

@@ -1,20 +1,20 @@
+import { randomUUID } from 'node:crypto';
 import type { Request } from 'express';
-import type { PoolClient } from 'pg';
 import type { EntityManager } from 'typeorm';
 import type { AppContext } from '../app-context';
 import type { Principal } from '../auth/principal';
 import { recordAudit } from '../audit/audit.service';
 import { CatalogueView } from '../proposals/proposal-subjects';
 import { NotFoundError, UnprocessableError, UnsupportedMediaTypeError } from '../shared/errors';
-import { copyLine, copyRows } from '../shared/copy-rows';
-import { checkWrittenRows, setBasedChecksPossible, withRowTriggersOff } from '../shared/set-based-checks';
 import { safeFileName } from '../shared/uploads';
 import { decodeUtf8, parseCsv, parseXml, type ImportProblem, type ImportRow } from './import-files';
-import { checkDraft, draftImport, importReferences, speciesNamesIn, type ImportSources, type PreparedImport } from './import-rows';
+import { checkDraft, draftImport, importReferences, newImportState, speciesNamesIn, type ImportSources, type PreparedImport } from './import-rows';
+import { ImportWriter } from './import-writer';
 
-/** Rows per COPY statement (its foreign-key checks run at its end) and per progress update. */
-const BATCH = 5000;
-const ITEM_COLUMNS = ['id', 'proposal_id', 'position', 'kind', 'payload', 'source_id', 'species_id', 'species_phase_id'] as const;
+/** Rows whose species are fetched at a time; each part is one COPY statement and one progress update. */
+const PART_ROWS = 5000;
+/** Rows checked between two turns of the event loop. */
+const STEP_ROWS = 1000;
 /** Problems kept on the job row; the dry run's answer carries all of them. */
 const STORED_PROBLEMS = 10_000;
 export const MAX_IMPORT_ROWS = 200_000;
@@ -42,10 +42,12 @@ const JOB_COLUMNS = `id, file_name AS "fileName", format, dry_run AS "dryRun", s
 
 /**
  * Bulk import of values from CSV or XML (FORMAT.md). A dry run checks every row and answers every
- * problem with its line, writing nothing but the job record. A real import first checks the same
- * way (any problem: 422, nothing written), then creates ONE draft proposal with all its items in a
- * single transaction, COPYed in statements of 5000 rows, reporting progress on the job row through a
- * second connection (the transaction's own writes stay invisible until it commits).
+ * problem with its line, writing nothing but the job record. A real import checks the same way
+ * (any problem: 422, nothing written) and writes ONE draft proposal with all its items in a single
+ * transaction. Rows are checked in parts of PART_ROWS; while one part is checked the parts before it
+ * are COPYed in that transaction (the database works while the API checks), and the first problem
+ * stops the writing and rolls it back. Progress shows on the job row through a second connection
+ * (the transaction's own writes stay invisible until it commits).
  */
 export class ImportsService {
   /** Jobs still writing, so a test or a shutdown can wait for them. */
@@ -59,120 +61,142 @@ export class ImportsService {
     if (!format) throw new UnsupportedMediaTypeError('Import files are CSV (.csv, text/csv) or XML (.xml, application/xml); see FORMAT.md');
     const started = Date.now();
 
-    const decoded = decodeUtf8(file.buffer);
-    const parsed = 'problem' in decoded ? { rows: [], problems: [decoded.problem], records: 0 } : format === 'csv' ? parseCsv(decoded.text) : parseXml(decoded.text);
-    const problems: ImportProblem[] = [...parsed.problems];
-    if (parsed.rows.length > MAX_IMPORT_ROWS) problems.push({ line: 1, message: `at most ${MAX_IMPORT_ROWS} rows per file (this one has ${parsed.rows.length})` });
-    if (parsed.rows.length === 0 && problems.length === 0) problems.push({ line: 1, message: 'the file holds no rows of values' });
+    // The writer's thread starts, connects and begins its transaction while the file is read; it
+    // is handed to the background only when every row passed, and otherwise rolled back.
+    const writer = options.dryRun ? null : new ImportWriter(this.ctx.config.databaseUrl);
+    let handedOver = false;
+    try {
+      const decoded = decodeUtf8(file.buffer);
+      const parsed = 'problem' in decoded ? { rows: [], problems: [decoded.problem], records: 0 } : format === 'csv' ? parseCsv(decoded.text) : parseXml(decoded.text);
+      const problems: ImportProblem[] = [...parsed.problems];
+      if (parsed.rows.length > MAX_IMPORT_ROWS) problems.push({ line: 1, message: `at most ${MAX_IMPORT_ROWS} rows per file (this one has ${parsed.rows.length})` });
+      if (parsed.rows.length === 0 && problems.length === 0) problems.push({ line: 1, message: 'the file holds no rows of values' });
 
-    const prepared = problems.length === 0 || parsed.rows.length > 0
-      ? await this.prepare(parsed.rows)
-      : { items: [], columns: [], problems: [], counts: { species: 0, phases: 0, values: 0 } };
-    problems.push(...prepared.problems);
-    problems.sort((a, b) => a.line - b.line);
-    const checkedMs = Date.now() - started;
+      const jobId = randomUUID();
+      // Every row is one value, so a file without problems makes as many values as it has rows.
+      const title = options.title?.trim() || `Import of ${fileName} (${parsed.rows.length} value${parsed.rows.length === 1 ? '' : 's'})`;
+      const writing = writer && problems.length === 0 ? writer : null;
+      await writing?.open(user, title, `Created by bulk import ${jobId}.`);
+      const checked = problems.length === 0 || parsed.rows.length > 0
+        ? await this.check(parsed.rows, writing)
+        : { problems: [], counts: { species: 0, phases: 0, values: 0 } };
+      problems.push(...checked.problems);
+      problems.sort((a, b) => a.line - b.line);
+      const checkedMs = Date.now() - started;
 
-    const job = await this.ctx.dataSource.transaction(async (m) => {
-      const [row] = await m.query(
-        `INSERT INTO import_jobs (created_by, file_name, format, dry_run, status, total_rows, processed_rows, error_count, errors, started_at, finished_at)
-         VALUES ($1, $2, $3, $4, $5, $6, $7, $8, $9, now(), CASE WHEN $5 IN ('succeeded', 'failed') THEN now() END) RETURNING id`,
-        [user.userId, fileName, format, options.dryRun, options.dryRun ? 'succeeded' : problems.length > 0 ? 'failed' : 'running',
-          parsed.records, options.dryRun || problems.length > 0 ? parsed.records : 0, problems.length, JSON.stringify(problems.slice(0, STORED_PROBLEMS))],
-      );
-      await recordAudit(m, {
-        action: options.dryRun ? 'import.dry_run' : 'import.start', actor: user, entityType: 'import_job', entityId: row.id,
-        details: { fileName, format, rows: parsed.rows.length, problems: problems.length },
-      }, req);
-      return row.id as string;
-    });
-    const summary = { rows: parsed.records, wouldCreate: prepared.counts, checkedInMs: checkedMs };
+      const job = await this.ctx.dataSource.transaction(async (m) => {
+        const [row] = await m.query(
+          `INSERT INTO import_jobs (id, created_by, file_name, format, dry_run, status, total_rows, processed_rows, error_count, errors, started_at, finished_at)
+           VALUES ($10, $1, $2, $3, $4, $5, $6, $7, $8, $9, now(), CASE WHEN $5 IN ('succeeded', 'failed') THEN now() END) RETURNING id`,
+          [user.userId, fileName, format, options.dryRun, options.dryRun ? 'succeeded' : problems.length > 0 ? 'failed' : 'running',
+            parsed.records, options.dryRun || problems.length > 0 ? parsed.records : 0, problems.length, JSON.stringify(problems.slice(0, STORED_PROBLEMS)), jobId],
+        );
+        await recordAudit(m, {
+          action: options.dryRun ? 'import.dry_run' : 'import.start', actor: user, entityType: 'import_job', entityId: row.id,
+          details: { fileName, format, rows: parsed.rows.length, problems: problems.length },
+        }, req);
+        return row.id as string;
+      });
+      const summary = { rows: parsed.records, wouldCreate: checked.counts, checkedInMs: checkedMs };
 
-    if (options.dryRun) return { status: 200, body: { ...(await this.get(user, job)), errors: problems, ...summary } };
-    if (problems.length > 0) {
-      throw new UnprocessableError(`${problems.length} problem${problems.length === 1 ? '' : 's'} in ${fileName}; nothing was imported: ${problems.slice(0, 3).map((p) => `line ${p.line}${p.field ? ` (${p.field})` : ''}: ${p.message}`).join('; ')}${problems.length > 3 ? '; …' : ''}`, { jobId: job, problems });
+      if (options.dryRun) return { status: 200, body: { ...(await this.get(user, job)), errors: problems, ...summary } };
+      if (problems.length > 0) {
+        throw new UnprocessableError(`${problems.length} problem${problems.length === 1 ? '' : 's'} in ${fileName}; nothing was imported: ${problems.slice(0, 3).map((p) => `line ${p.line}${p.field ? ` (${p.field})` : ''}: ${p.message}`).join('; ')}${problems.length > 3 ? '; …' : ''}`, { jobId: job, problems });
+      }
+
+      const rows = parsed.rows.length;
+      const items = checked.counts.species + checked.counts.phases + checked.counts.values;
+      writing!.reportTo((written) => this.progress(job, Math.floor((rows * written) / Math.max(1, items))));
+      handedOver = true;
+      const work = this.finish(user, job, writing!, file, fileName, format, title, req)
+        .catch((error: Error) => this.fail(job, error))
+        .finally(() => ImportsService.running.delete(job));
+      ImportsService.running.set(job, work);
+      return { status: 202, body: { ...(await this.get(user, job)), ...summary } };
+    } finally {
+      if (writer && !handedOver) await writer.abort();
     }
-
-    if (this.ctx.store) await this.ctx.store.put(`imports/${job}/${fileName}`, file.buffer, format === 'csv' ? 'text/csv' : 'application/xml').catch(() => undefined);
-    const title = options.title?.trim() || `Import of ${fileName} (${prepared.counts.values} value${prepared.counts.values === 1 ? '' : 's'})`;
-    const work = this.write(user, job, title, prepared, parsed.rows.length, req)
-      .catch((error: Error) => this.fail(job, error))
-      .finally(() => ImportsService.running.delete(job));
-    ImportsService.running.set(job, work);
-    return { status: 202, body: { ...(await this.get(user, job)), ...summary } };
   }
 
   /**
-   * Checks the rows against just the part of the catalogue they name: the species their formulas
-   * and names can mean, then the species the items name by name (those the import adds, to see
-   * clashes with species of other formulas).
+   * Checks the rows part by part against just the part of the catalogue they name: the species
+   * their formulas and names can mean, then the species the items name by name (those the import
+   * adds, to see clashes with species of other formulas). The next part's species are fetched while
+   * a part is checked; each part without problems (while no part had any) goes to `writer`.
    */
-  private async prepare(rows: ImportRow[]): Promise<PreparedImport> {
+  private async check(rows: ImportRow[], writer: ImportWriter | null): Promise<{ problems: ImportProblem[]; counts: PreparedImport['counts'] }> {
     const manager = this.ctx.dataSource.manager;
-    const references = importReferences(rows);
     const catalogue = new CatalogueView();
-    const [sources] = await Promise.all([
-      this.sources(manager, references.sourceKeys, references.dois),
-      catalogue.loadSpeciesOfFormulas(manager, references),
-    ]);
-    const draft = draftImport(rows, references, catalogue, sources);
-    await catalogue.loadSpeciesNamed(manager, speciesNamesIn(draft));
-    return checkDraft(draft, catalogue);
+    const sources: ImportSources = { byKey: new Map(), byDoi: new Map() };
+    const state = newImportState();
+    const problems: ImportProblem[] = [];
+    const counts = { species: 0, phases: 0, values: 0 };
+    const fetch = async (part: ImportRow[]) => {
+      const references = importReferences(part);
+      await Promise.all([this.loadSources(manager, references.sourceKeys, references.dois, sources), catalogue.loadSpeciesOfFormulas(manager, references)]);
+      return references;
+    };
+    // The first part is small, so that the database starts writing soon.
+    const endOf = (start: number) => Math.min(rows.length, start === 0 ? STEP_ROWS : start + PART_ROWS);
+    let next = fetch(rows.slice(0, endOf(0)));
+    let unwritten: PreparedImport[] = [];
+    const flush = () => {
+      if (writer && problems.length === 0 && unwritten.length > 0) writer.write(joinParts(unwritten));
+      unwritten = [];
+    };
+    for (let start = 0; start < rows.length; start = endOf(start)) {
+      const end = endOf(start);
+      const references = await next;
+      if (end < rows.length) {
+        next = fetch(rows.slice(end, endOf(end)));
+        // Awaited in the next round; until then a failure must not count as unhandled.
+        next.catch(() => undefined);
+      }
+      for (let at = start; at < end; at += STEP_ROWS) {
+        const draft = draftImport(rows.slice(at, Math.min(at + STEP_ROWS, end)), references, catalogue, sources, state);
+        await catalogue.loadSpeciesNamed(manager, speciesNamesIn(draft));
+        const prepared = checkDraft(draft, catalogue, state);
+        problems.push(...prepared.problems);
+        counts.species += prepared.counts.species;
+        counts.phases += prepared.counts.phases;
+        counts.values += prepared.counts.values;
+        unwritten.push(prepared);
+        // A turn of the event loop now and then, so the COPYs queued before go on meanwhile.
+        await new Promise((resolve) => setImmediate(resolve));
+      }
+      flush();
+    }
+    return { problems, counts };
   }
 
-  private async sources(manager: EntityManager, keys: string[], dois: string[]): Promise<ImportSources> {
+  /** Adds to `into` the sources the rows name by key or DOI and `into` does not hold yet. */
+  private async loadSources(manager: EntityManager, keys: string[], dois: string[], into: ImportSources): Promise<void> {
+    const wantedKeys = keys.filter((k) => !into.byKey.has(k));
+    const wantedDois = dois.filter((d) => !into.byDoi.has(d));
+    if (wantedKeys.length === 0 && wantedDois.length === 0) return;
     const rows: { id: string; shortKey: string; doi: string | null; mergedInto: string | null }[] = await manager.query(
       `SELECT id, short_key AS "shortKey", doi, merged_into_id AS "mergedInto" FROM sources WHERE short_key = ANY($1::text[]) OR doi = ANY($2::text[])`,
-      [keys, dois],
+      [wantedKeys, wantedDois],
     );
-    const byKey = new Map<string, string>();
-    const byDoi = new Map<string, string>();
     for (const r of rows) {
       // A merged duplicate's key still works and means the source it was merged into.
-      byKey.set(r.shortKey, r.mergedInto ?? r.id);
-      if (r.doi) byDoi.set(r.doi, r.mergedInto ?? r.id);
+      into.byKey.set(r.shortKey, r.mergedInto ?? r.id);
+      if (r.doi) into.byDoi.set(r.doi, r.mergedInto ?? r.id);
     }
-    return { byKey, byDoi };
   }
 
-  /**
-   * The one transaction of a real import: proposal, items COPYed in statements of BATCH rows,
-   * audit; progress on the side. The items were checked against the catalogue a moment ago; a
-   * draft is checked again in full when it is submitted, and the database's foreign keys refuse
-   * anything that vanished meanwhile.
-   */
-  private async write(user: Principal, jobId: string, title: string, prepared: PreparedImport, rows: number, req: Request): Promise<void> {
-    const items = prepared.items;
-    const total = items.length;
-    const proposalId = await this.ctx.dataSource.transaction(async (m) => {
-      const [proposal] = await m.query(
-        `INSERT INTO proposals (title, summary, author_id) VALUES ($1, $2, $3) RETURNING id`,
-        [title.slice(0, 300), `Created by bulk import ${jobId}.`, user.userId],
-      );
-      function* lines(): Generator<string> {
-        for (const [i, item] of items.entries()) {
-          const cols = prepared.columns[i];
-          yield copyLine([item.id, proposal.id, item.position, item.kind, item.payload, item.sourceId, cols.speciesId, cols.speciesPhaseId]);
-        }
-      }
-      // The transaction's own connection: COPY runs in the same transaction as everything else here.
-      const client = (await m.queryRunner!.connect()) as PoolClient;
-      const copy = () => copyRows(client, 'proposal_items', ITEM_COLUMNS, lines(), BATCH, (written) => this.progress(jobId, Math.floor((rows * written) / total)));
-      // One check of every reference after the COPY where the database role allows it, else a trigger per row.
-      const checks = await setBasedChecksPossible(client, 'proposal_items');
-      if (checks) {
-        await withRowTriggersOff(client, copy);
-        await checkWrittenRows(client, checks, ITEM_COLUMNS, { column: 'proposal_id', value: proposal.id });
-      } else {
-        await copy();
-      }
-      await recordAudit(m, { action: 'proposal.create', actor: user, entityType: 'proposal', entityId: proposal.id, details: { title, importJobId: jobId, items: total } }, req);
-      return proposal.id as string;
-    });
+  /** After the 202: the rest of the COPY, the reference check and COMMIT, then the job marked done. */
+  private async finish(user: Principal, jobId: string, writer: ImportWriter, file: Express.Multer.File, fileName: string, format: 'csv' | 'xml', title: string, req: Request): Promise<void> {
+    // The file is kept beside the import (when an object store is configured) while the transaction ends.
+    const [items] = await Promise.all([
+      writer.finish(user, { title, importJobId: jobId }, req),
+      this.ctx.store?.put(`imports/${jobId}/${fileName}`, file.buffer, format === 'csv' ? 'text/csv' : 'application/xml').catch(() => undefined),
+    ]);
     await this.ctx.dataSource.query(
       `UPDATE import_jobs SET status = 'succeeded', processed_rows = total_rows, proposal_id = $2, finished_at = now() WHERE id = $1`,
-      [jobId, proposalId],
+      [jobId, writer.proposalId],
     );
-    await recordAudit(this.ctx.dataSource.manager, { action: 'import.finish', actor: user, entityType: 'import_job', entityId: jobId, details: { proposalId, items: total } }, req);
+    await recordAudit(this.ctx.dataSource.manager, { action: 'import.finish', actor: user, entityType: 'import_job', entityId: jobId, details: { proposalId: writer.proposalId, items } }, req);
   }
 
   /** Progress, through its own connection so that it is visible while the import's transaction runs. */
@@ -213,6 +237,17 @@ export class ImportsService {
     );
     return { items };
   }
+}
+
+/** Consecutive checked parts as one. */
+function joinParts(parts: PreparedImport[]): PreparedImport {
+  if (parts.length === 1) return parts[0];
+  return {
+    items: parts.flatMap((p) => p.items),
+    columns: parts.flatMap((p) => p.columns),
+    problems: parts.flatMap((p) => p.problems),
+    counts: { species: 0, phases: 0, values: 0 },
+  };
 }
 
 function formatOf(fileName: string, mimetype: string): 'csv' | 'xml' | undefined {

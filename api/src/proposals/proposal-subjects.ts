@@ -100,11 +100,13 @@ export class CatalogueView {
    */
   async loadSpeciesOfFormulas(manager: EntityManager, wanted: { hillFormulas: string[]; namedHillFormulas: string[]; names: string[] }): Promise<void> {
     if (wanted.hillFormulas.length === 0 && wanted.namedHillFormulas.length === 0) return;
+    // One scan of the three indexes (Hill formula, lower(name), lowered synonyms), OR-ed: cheap enough that PostgreSQL plans no parallel workers.
     await this.loadSpeciesWhere(
       manager,
-      `SELECT id FROM species WHERE hill_formula = ANY($1::text[])
-       UNION ALL SELECT id FROM species WHERE hill_formula = ANY($2::text[]) AND lower(name) = ANY($3::text[])
-       UNION ALL SELECT x.id FROM species x CROSS JOIN LATERAL unnest(x.synonyms) AS synonym WHERE x.hill_formula = ANY($2::text[]) AND lower(synonym) = ANY($3::text[])`,
+      `hill_formula = ANY($1::text[])
+       OR (hill_formula = ANY($2::text[]) AND lower(name) = ANY($3::text[]))
+       OR (kx_lower_all(synonyms) && $3::text[] AND hill_formula = ANY($2::text[])
+           AND EXISTS (SELECT 1 FROM unnest(synonyms) AS synonym WHERE lower(synonym) = ANY($3::text[])))`,
       [[...new Set(wanted.hillFormulas)], [...new Set(wanted.namedHillFormulas)], caseKeys(wanted.names)],
     );
   }
@@ -117,18 +119,15 @@ export class CatalogueView {
     if (texts.length === 0) return;
     await this.loadSpeciesWhere(
       manager,
-      `SELECT id FROM species WHERE lower(btrim(name)) = ANY($1::text[]) OR lower(btrim(formula)) = ANY($1::text[])
-       UNION ALL SELECT x.id FROM species x CROSS JOIN LATERAL unnest(x.synonyms) AS synonym WHERE lower(btrim(synonym)) = ANY($1::text[])`,
+      `lower(btrim(name)) = ANY($1::text[]) OR lower(btrim(formula)) = ANY($1::text[])
+       OR EXISTS (SELECT 1 FROM unnest(synonyms) AS synonym WHERE lower(btrim(synonym)) = ANY($1::text[]))`,
       [caseKeys(texts.map((t) => t.trim()))],
     );
   }
 
-  /**
-   * Adds the species whose ids `idQuery` selects (in a form PostgreSQL runs without a per-row
-   * subplan: its array comparisons are hashed), and all their phases.
-   */
-  private async loadSpeciesWhere(manager: EntityManager, idQuery: string, parameters: unknown[]): Promise<void> {
-    const species: CatalogueSpecies[] = await manager.query(`SELECT ${SPECIES_COLUMNS} FROM species WHERE id IN (${idQuery})`, parameters);
+  /** Adds the species that `where` selects, and all their phases. */
+  private async loadSpeciesWhere(manager: EntityManager, where: string, parameters: unknown[]): Promise<void> {
+    const species: CatalogueSpecies[] = await manager.query(`SELECT ${SPECIES_COLUMNS} FROM species WHERE ${where}`, parameters);
     const added = species.filter((s) => !this.speciesById.has(s.id));
     for (const s of added) this.addSpecies(s);
     if (added.length === 0) return;
@@ -286,16 +285,27 @@ export function itemColumns(r: ResolvedItem): { speciesId: string | null; specie
   };
 }
 
+/** What resolution remembers from earlier items: a long item list can be resolved in parts, in position order. */
+export interface ResolutionState {
+  newSpecies: SubjectSpecies[];
+  newPhases: (SubjectPhase & { speciesKey: string })[];
+  /** lineage → position of the item that revises, retires or replaces it */
+  targetedValues: Map<string, number>;
+  targetedFits: Map<string, number>;
+}
+
+export function newResolutionState(): ResolutionState {
+  return { newSpecies: [], newPhases: [], targetedValues: new Map(), targetedFits: new Map() };
+}
+
 /**
  * Resolves every item in position order. An item may refer to a species or phase that an earlier
  * item adds. Problems name the field; an item with problems still gets what could be resolved.
+ * A long list can come in parts, in position order, with one `state` for all of them.
  */
-export function resolveItems(items: ItemInput[], catalogue: CatalogueView): ResolvedItem[] {
+export function resolveItems(items: ItemInput[], catalogue: CatalogueView, state: ResolutionState = newResolutionState()): ResolvedItem[] {
   const ordered = [...items].sort((a, b) => a.position - b.position);
-  const newSpecies: SubjectSpecies[] = [];
-  const newPhases: (SubjectPhase & { speciesKey: string })[] = [];
-  const targetedValues = new Map<string, number>();
-  const targetedFits = new Map<string, number>();
+  const { newSpecies, newPhases, targetedValues, targetedFits } = state;
   const results: ResolvedItem[] = [];
 
   const findSpecies = (refs: PayloadReferences, problems: EntryProblem[]): SubjectSpecies | undefined => {

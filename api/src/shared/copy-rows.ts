@@ -1,5 +1,5 @@
 import { Readable } from 'node:stream';
-import { pipeline } from 'node:stream/promises';
+import { finished, pipeline } from 'node:stream/promises';
 import type { ClientBase } from 'pg';
 import { from as copyFrom } from 'pg-copy-streams';
 
@@ -32,6 +32,26 @@ function escapeText(text: string): string {
   return /[\\\n\r\t]/.test(text) ? text.replace(/[\\\n\r\t]/g, (c) => ({ '\\': '\\\\', '\n': '\\n', '\r': '\\r', '\t': '\\t' })[c]!) : text;
 }
 
+const NON_ASCII = /[^\x00-\x7f]/;
+const NON_ASCII_ALL = /[^\x00-\x7f]/g;
+
+/**
+ * A jsonb field in COPY's text format, written in ASCII only (other characters as JSON's \uXXXX
+ * escapes, which PostgreSQL reads back as the same characters): ASCII text becomes bytes without
+ * UTF-8 encoding, the costliest step of writing a large COPY from JavaScript.
+ */
+export function copyJsonField(value: unknown): string {
+  return copyJsonText(JSON.stringify(value));
+}
+
+/** `copyJsonField` of JSON text already made. */
+export function copyJsonText(text: string): string {
+  let json = text;
+  if (NON_ASCII.test(json)) json = json.replace(NON_ASCII_ALL, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
+  // JSON text holds no raw newline or tab; its backslashes are COPY's escape character.
+  return json.includes('\\') ? json.replace(/\\/g, '\\\\') : json;
+}
+
 /** One row of COPY text, ending in a newline. */
 export function copyLine(fields: readonly unknown[]): string {
   let line = '';
@@ -55,9 +75,11 @@ export async function copyRows(
     let inStatement = 0;
     const first = iterator.next();
     if (first.done) break;
-    // Chunks of ~256 kB: fewer, larger writes to the socket.
-    function* chunks(): Generator<string> {
-      let buffer = first.value;
+    // Chunks of ~256 kB: fewer, larger writes to the socket. Lines are joined (not appended one by
+    // one, which leaves a string of thousands of pieces to flatten) and ASCII goes out as it is.
+    function* chunks(): Generator<Buffer> {
+      let lines: string[] = [first.value];
+      let length = first.value.length;
       inStatement = 1;
       while (inStatement < rowsPerStatement) {
         const next = iterator.next();
@@ -65,14 +87,16 @@ export async function copyRows(
           finished = true;
           break;
         }
-        buffer += next.value;
+        lines.push(next.value);
+        length += next.value.length;
         inStatement++;
-        if (buffer.length > 262_144) {
-          yield buffer;
-          buffer = '';
+        if (length > 262_144) {
+          yield encode(lines.join(''));
+          lines = [];
+          length = 0;
         }
       }
-      if (buffer) yield buffer;
+      if (lines.length > 0) yield encode(lines.join(''));
     }
     const stream = client.query(copyFrom(`COPY ${table} (${columns.join(', ')}) FROM STDIN`));
     await pipeline(Readable.from(chunks(), { objectMode: false }), stream);
@@ -80,4 +104,76 @@ export async function copyRows(
     if (afterStatement) await afterStatement(total);
   }
   return total;
+}
+
+function encode(text: string): Buffer {
+  return Buffer.from(text, NON_ASCII.test(text) ? 'utf8' : 'latin1');
+}
+
+const PIECE_BYTES = 1 << 20;
+
+/**
+ * COPY text written straight into byte buffers, row by row: no line strings to build, join and
+ * encode. A row may run across two pieces; COPY reads them as one stream.
+ */
+export class CopyTextBuilder {
+  readonly pieces: Buffer[] = [];
+  rows = 0;
+  private buffer = Buffer.allocUnsafe(PIECE_BYTES);
+  private at = 0;
+  private startOfRow = true;
+
+  /** A field that needs no escaping: an integer, or text of ASCII letters, digits and dashes (a uuid, a vocabulary word); null is \N. */
+  word(value: string | number | null): this {
+    return this.put(value === null ? '\\N' : typeof value === 'number' ? String(value) : value);
+  }
+
+  /** A jsonb field (`copyJsonField`). */
+  json(value: unknown): this {
+    return this.put(copyJsonField(value));
+  }
+
+  /** A jsonb field from JSON text (`copyJsonText`). */
+  jsonText(text: string): this {
+    return this.put(copyJsonText(text));
+  }
+
+  endRow(): void {
+    this.reserve(1);
+    this.buffer[this.at++] = 10;
+    this.startOfRow = true;
+    this.rows++;
+  }
+
+  /** The bytes so far; the builder is done with. */
+  finish(): Buffer[] {
+    if (this.at > 0) this.pieces.push(this.buffer.subarray(0, this.at));
+    this.at = 0;
+    return this.pieces;
+  }
+
+  /** `text` is ASCII: one byte per character. */
+  private put(text: string): this {
+    this.reserve(text.length + 1);
+    if (!this.startOfRow) this.buffer[this.at++] = 9;
+    this.startOfRow = false;
+    this.at += this.buffer.write(text, this.at, 'latin1');
+    return this;
+  }
+
+  private reserve(bytes: number): void {
+    if (this.at + bytes <= this.buffer.length) return;
+    this.pieces.push(this.buffer.subarray(0, this.at));
+    this.buffer = Buffer.allocUnsafe(Math.max(PIECE_BYTES, bytes));
+    this.at = 0;
+  }
+}
+
+/** One COPY statement of ready bytes (`CopyTextBuilder`) on `client`. */
+export async function copyPieces(client: ClientBase, table: string, columns: readonly string[], pieces: readonly Buffer[]): Promise<void> {
+  const stream = client.query(copyFrom(`COPY ${table} (${columns.join(', ')}) FROM STDIN`));
+  const done = finished(stream);
+  for (const piece of pieces) stream.write(piece);
+  stream.end();
+  await done;
 }

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { Client } from 'pg';
 import { copyLine, copyRows } from './copy-rows';
-import { checkWrittenRows, setBasedChecksPossible, SetBasedCheckError, withRowTriggersOff } from './set-based-checks';
+import { checkForeignKeys, checkWrittenRows, setBasedChecksPossible, SetBasedCheckError, withRowTriggersOff } from './set-based-checks';
 import { testApp } from '../testing/test-app';
 
 const COLUMNS = ['id', 'proposal_id', 'position', 'kind', 'payload', 'source_id', 'species_id', 'species_phase_id'] as const;
@@ -61,6 +61,15 @@ describe('set-based checks of a bulk write', () => {
     await expectAsync(other.query(`SELECT 1 FROM species WHERE id = $1 FOR UPDATE NOWAIT`, [phase.speciesId])).toBeRejectedWith(jasmine.objectContaining({ code: '55P03' }));
     const { rows: [{ session_replication_role: role }] } = await client.query(`SHOW session_replication_role`);
     expect(role).toBe('origin');
+  });
+
+  it('checks a range of the written rows on its own and answers how many it checked', async () => {
+    const missing = randomUUID();
+    const proposalId = await draftWith([1, 2, 3].map((position) => ({ position, speciesPhaseId: phase.id })).concat([{ position: 4, speciesPhaseId: missing }]));
+    const checks = (await setBasedChecksPossible(client, 'proposal_items'))!;
+    const scope = (from: number, to: number) => ({ column: 'proposal_id', value: proposalId, range: { column: 'position', from, to } });
+    expect(await checkForeignKeys(client, checks, COLUMNS, scope(1, 3))).toBe(3);
+    await expectAsync(checkForeignKeys(client, checks, COLUMNS, scope(3, 4))).toBeRejectedWithError(SetBasedCheckError, new RegExp(missing));
   });
 
   it('refuses a row that refers to a species phase that does not exist, naming the constraint and the value', async () => {

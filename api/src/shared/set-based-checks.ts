@@ -87,60 +87,83 @@ export async function setBasedChecksPossible(client: ClientBase, table: string):
   return { table, foreignKeys, deferrableUniques };
 }
 
+/** Row triggers off or on again until the current transaction ends (the setting ends with it). */
+export async function rowTriggers(client: ClientBase, state: 'off' | 'on'): Promise<void> {
+  await client.query(`SET LOCAL session_replication_role = ${state === 'off' ? 'replica' : 'origin'}`);
+}
+
 /** Runs `write` (COPY statements on `client`) with row triggers off in the current transaction, then turns them on again. */
 export async function withRowTriggersOff<T>(client: ClientBase, write: () => Promise<T>): Promise<T> {
-  await client.query(`SET LOCAL session_replication_role = replica`);
+  await rowTriggers(client, 'off');
   // When the write fails the transaction is aborted and will roll back, setting and all.
   const result = await write();
-  await client.query(`SET LOCAL session_replication_role = origin`);
+  await rowTriggers(client, 'on');
   return result;
 }
 
+/** Which written rows to check: those whose `column` is `value` (and, optionally, whose `range.column` lies in the range). */
+export interface WrittenScope {
+  column: string;
+  value: unknown;
+  range?: { column: string; from: number; to: number };
+}
+
 /**
- * Checks the rows written in this transaction that `scope` selects (a column and its value, such
- * as the proposal they belong to) against every foreign key whose column was written (or has a
- * default), locking each referenced row FOR KEY SHARE, and against every DEFERRABLE unique
- * constraint. Throws SetBasedCheckError naming the constraint and up to three offending values.
+ * Checks the rows written in this transaction that `scope` selects against every foreign key whose
+ * column was written (or has a default), locking each referenced row FOR KEY SHARE, and against
+ * every DEFERRABLE unique constraint. Throws SetBasedCheckError naming the constraint and up to
+ * three offending values.
  */
-export async function checkWrittenRows(
-  client: ClientBase, checks: TableChecks, writtenColumns: readonly string[], scope: { column: string; value: unknown },
-): Promise<void> {
-  const table = identifier(checks.table);
-  const scoped = `${identifier(scope.column)} = $1`;
+export async function checkWrittenRows(client: ClientBase, checks: TableChecks, writtenColumns: readonly string[], scope: WrittenScope): Promise<void> {
+  await checkForeignKeys(client, checks, writtenColumns, scope);
+  await checkDeferrableUniques(client, checks, scope);
+}
+
+/** The foreign-key half of `checkWrittenRows`; answers how many rows it checked. */
+export async function checkForeignKeys(client: ClientBase, checks: TableChecks, writtenColumns: readonly string[], scope: WrittenScope): Promise<number> {
+  const { where, parameters } = scopeSql(scope);
   const foreignKeys = checks.foreignKeys.filter((fk) => writtenColumns.includes(fk.column) || fk.hasDefault);
-  if (foreignKeys.length > 0) {
-    // The written rows are read once; each foreign key then makes the lookup and lock of its row
-    // trigger (RI_FKey_check) once per distinct value.
-    const columns = [...new Set(foreignKeys.map((fk) => identifier(fk.column)))];
-    const { rows: missing } = await client.query(
-      `WITH written AS MATERIALIZED (SELECT ${columns.join(', ')} FROM ${table} WHERE ${scoped})
-       ${foreignKeys.map((fk, i) => `SELECT ${i} AS fk, w.k::text AS value
-          FROM (SELECT DISTINCT ${identifier(fk.column)} AS k FROM written WHERE ${identifier(fk.column)} IS NOT NULL) w
-          LEFT JOIN LATERAL (SELECT 1 AS found FROM ONLY ${fk.referencedTable} r WHERE r.${identifier(fk.referencedColumn)} = w.k FOR KEY SHARE OF r) l ON true
-         WHERE l.found IS NULL`).join('\n       UNION ALL ')}
-       LIMIT 3`,
-      [scope.value],
+  const columns = [...new Set(foreignKeys.map((fk) => identifier(fk.column)))];
+  // The written rows are read once; each foreign key then makes the lookup and lock of its row
+  // trigger (RI_FKey_check) once per distinct value.
+  const missing = foreignKeys.map((fk, i) => `SELECT ${i} AS fk, w.k::text AS value
+      FROM (SELECT DISTINCT ${identifier(fk.column)} AS k FROM written WHERE ${identifier(fk.column)} IS NOT NULL) w
+      LEFT JOIN LATERAL (SELECT 1 AS found FROM ONLY ${fk.referencedTable} r WHERE r.${identifier(fk.referencedColumn)} = w.k FOR KEY SHARE OF r) l ON true
+     WHERE l.found IS NULL`);
+  const { rows: [result] } = await client.query(
+    `WITH written AS MATERIALIZED (SELECT ${columns.length > 0 ? columns.join(', ') : '1'} FROM ${identifier(checks.table)} t WHERE ${where})
+     ${missing.length > 0 ? `, missing AS (${missing.join('\n     UNION ALL ')})` : ''}
+     SELECT (SELECT count(*) FROM written)::int AS rows,
+            ${missing.length > 0 ? `(SELECT json_agg(m) FROM (SELECT fk, value FROM missing LIMIT 3) m)` : 'NULL'} AS missing`,
+    parameters,
+  );
+  const found = (result.missing ?? []) as { fk: number; value: string }[];
+  if (found.length > 0) {
+    const fk = foreignKeys[found[0].fk];
+    const values = found.filter((m) => m.fk === found[0].fk).map((m) => m.value);
+    throw new SetBasedCheckError(
+      `insert or update on table "${checks.table}" violates foreign key constraint "${fk.name}": no ${fk.referencedTable} (${fk.referencedColumn}) = ${values.join(', ')}`,
     );
-    if (missing.length > 0) {
-      const fk = foreignKeys[missing[0].fk];
-      const values = missing.filter((m) => m.fk === missing[0].fk).map((m) => m.value);
-      throw new SetBasedCheckError(
-        `insert or update on table "${checks.table}" violates foreign key constraint "${fk.name}": no ${fk.referencedTable} (${fk.referencedColumn}) = ${values.join(', ')}`,
-      );
-    }
   }
+  return result.rows as number;
+}
+
+/** The unique-constraint half of `checkWrittenRows`. */
+export async function checkDeferrableUniques(client: ClientBase, checks: TableChecks, scope: WrittenScope): Promise<void> {
+  const table = identifier(checks.table);
+  const { where, parameters } = scopeSql(scope);
   for (const unique of checks.deferrableUniques) {
     const columns = unique.columns.map(identifier);
     const key = columns.map((c) => `t.${c}::text`).join(` || ', ' || `);
     // With the scope column in the key, every row that could repeat a written key is in scope: one
     // hashed GROUP BY. Otherwise each written key is looked up in the constraint's index.
     const { rows: repeated } = await client.query(
-      unique.columns.includes(scope.column)
-        ? `SELECT ${key} AS value FROM ${table} t WHERE t.${scoped} GROUP BY ${columns.map((c) => `t.${c}`).join(', ')} HAVING count(*) > 1 LIMIT 3`
+      unique.columns.includes(scope.column) && !scope.range
+        ? `SELECT ${key} AS value FROM ${table} t WHERE ${where} GROUP BY ${columns.map((c) => `t.${c}`).join(', ')} HAVING count(*) > 1 LIMIT 3`
         : `SELECT ${key} AS value FROM ${table} t
             CROSS JOIN LATERAL (SELECT count(*) AS n FROM (SELECT 1 FROM ${table} u WHERE ${columns.map((c) => `u.${c} = t.${c}`).join(' AND ')} LIMIT 2) x) d
-            WHERE t.${scoped} AND d.n > 1 LIMIT 3`,
-      [scope.value],
+            WHERE ${where} AND d.n > 1 LIMIT 3`,
+      parameters,
     );
     if (repeated.length > 0) {
       throw new SetBasedCheckError(
@@ -148,4 +171,10 @@ export async function checkWrittenRows(
       );
     }
   }
+}
+
+function scopeSql(scope: WrittenScope): { where: string; parameters: unknown[] } {
+  const where = `t.${identifier(scope.column)} = $1`;
+  if (!scope.range) return { where, parameters: [scope.value] };
+  return { where: `${where} AND t.${identifier(scope.range.column)} BETWEEN $2 AND $3`, parameters: [scope.value, scope.range.from, scope.range.to] };
 }
