@@ -1,4 +1,4 @@
-import { parseCsv, parseXml } from './import-files';
+import { csvRows, decodeUtf8, parseCsv, parseXml, rowsOf } from './import-files';
 import { readPressure, readTemperature } from './import-rows';
 
 describe('import files: CSV', () => {
@@ -18,6 +18,31 @@ describe('import files: CSV', () => {
     expect(rows[0].fields).toEqual(jasmine.objectContaining({ formula: 'H2O', notes: 'note, with a comma', sourceKey: 'codata-1989' }));
     expect(rows[1].fields.notes).toBe('two\nlines and a "quote"');
     expect(rows[2].fields.notes).toBeUndefined();
+  });
+
+  it('reads rows as they are asked for: the same rows, lines and problems as reading the whole file', () => {
+    const lines = ['formula,name,phase,quantity,value,unit,pressure,method,sourceKey,notes'];
+    for (let i = 1; i <= 25; i++) lines.push(i === 7 ? 'CH4,methane,g' : i === 12 ? '"multi\nline",x,g,S,1,J/(mol·K),1 bar,measured,k,' : `CH4,methane,g,Cp,${30 + i},J/(mol·K),1 bar,measured,k,`);
+    const csv = lines.join('\n');
+    const whole = parseCsv(csv);
+    const reader = csvRows(csv);
+    expect(reader.problems).toEqual([]);
+    const parts = [reader.next(10), reader.next(10), reader.next(10), reader.next(10)];
+    expect(parts.map((p) => p.length)).toEqual([10, 10, 4, 0]);
+    expect(parts.flat()).toEqual(whole.rows);
+    expect(reader.problems).toEqual(whole.problems);
+    expect(reader.problems).toEqual([{ line: 8, message: '3 fields where the header has 10' }]);
+    expect(reader.records).toBe(25);
+    expect(whole.records).toBe(25);
+    // A file read whole (XML) hands its rows out the same way.
+    const handed = rowsOf(whole);
+    expect([...handed.next(20), ...handed.next(20)]).toEqual(whole.rows);
+  });
+
+  it('refuses bytes that are not UTF-8, and NUL bytes, before reading anything', () => {
+    expect(decodeUtf8(Buffer.from('formula\nH₂O', 'utf8'))).toEqual({ text: 'formula\nH₂O' });
+    expect(decodeUtf8(Buffer.from([0x66, 0xff, 0x6f]))).toEqual({ problem: { line: 1, message: 'the file is not UTF-8 text' } });
+    expect(decodeUtf8(Buffer.from([0x66, 0x00, 0x6f]))).toEqual({ problem: { line: 1, message: 'the file holds NUL bytes: it is not a text file' } });
   });
 
   it('reports unknown and missing columns on the header line and short rows on their own line', () => {

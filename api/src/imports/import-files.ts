@@ -61,11 +61,45 @@ export function decodeUtf8(bytes: Buffer): { text: string } | { problem: ImportP
  * lines starting with # are skipped.
  */
 export function parseCsv(text: string): ParsedFile {
+  const reader = csvRows(text);
+  const rows = reader.next(Number.POSITIVE_INFINITY);
+  return { rows, problems: reader.problems, records: reader.records };
+}
+
+/** A file's rows, read as they are asked for: a large file can be checked (and written) while it is still being read. */
+export interface RowReader {
+  /** problems of the file's form found so far (header, malformed records) */
+  readonly problems: ImportProblem[];
+  /** data records read so far, including those too malformed to become rows */
+  readonly records: number;
+  /** up to `max` more rows; fewer (or none) at the end of the file */
+  next(max: number): ImportRow[];
+}
+
+/** The rows of a file read at once (XML), handed out as asked for. */
+export function rowsOf(parsed: ParsedFile): RowReader {
+  let at = 0;
+  return {
+    problems: parsed.problems,
+    records: parsed.records,
+    next(max) {
+      const rows = parsed.rows.slice(at, at + max);
+      at += rows.length;
+      return rows;
+    },
+  };
+}
+
+/** The CSV rows of `text` (see parseCsv), read as they are asked for; the header is read at once. */
+export function csvRows(text: string): RowReader {
   const problems: ImportProblem[] = [];
-  const records = splitCsv(text, problems);
-  const rows: ImportRow[] = [];
-  const header = records.shift();
-  if (!header) return { rows, problems: [...problems, { line: 1, message: 'the file is empty: it needs a header line naming the columns' }], records: 0 };
+  const records = csvRecords(text, problems);
+  const first = records.next();
+  if (first.done) {
+    problems.push({ line: 1, message: 'the file is empty: it needs a header line naming the columns' });
+    return { problems, records: 0, next: () => [] };
+  }
+  const header = first.value;
   const columns = header.fields.map((name, index) => {
     const column = columnFor(name);
     if (!column) problems.push({ line: header.line, field: name, message: `unknown column "${name}" (columns: ${IMPORT_COLUMNS.join(', ')})` });
@@ -81,28 +115,39 @@ export function parseCsv(text: string): ParsedFile {
     if (!seen.has(required)) problems.push({ line: header.line, field: required, message: `column ${required} is required` });
   }
   if (!seen.has('sourceKey') && !seen.has('doi')) problems.push({ line: header.line, field: 'sourceKey', message: 'a sourceKey or doi column is required: no value without a source' });
-  for (const record of records) {
-    if (record.fields.length !== header.fields.length) {
-      problems.push({ line: record.line, message: `${record.fields.length} field${record.fields.length === 1 ? '' : 's'} where the header has ${header.fields.length}` });
-      continue;
-    }
-    const fields: ImportRow['fields'] = {};
-    for (const { column, index } of columns) {
-      const value = record.fields[index].trim();
-      if (column && value !== '') fields[column] = value;
-    }
-    rows.push({ line: record.line, fields });
-  }
-  return { rows, problems, records: records.length };
+  const reader = {
+    problems,
+    records: 0,
+    next(max: number): ImportRow[] {
+      const rows: ImportRow[] = [];
+      while (rows.length < max) {
+        const next = records.next();
+        if (next.done) break;
+        const record = next.value;
+        reader.records++;
+        if (record.fields.length !== header.fields.length) {
+          problems.push({ line: record.line, message: `${record.fields.length} field${record.fields.length === 1 ? '' : 's'} where the header has ${header.fields.length}` });
+          continue;
+        }
+        const fields: ImportRow['fields'] = {};
+        for (const { column, index } of columns) {
+          const value = record.fields[index].trim();
+          if (column && value !== '') fields[column] = value;
+        }
+        rows.push({ line: record.line, fields });
+      }
+      return rows;
+    },
+  };
+  return reader;
 }
 
 const COMMA = 44;
 const LF = 10;
 const CR = 13;
 
-/** Records with the line each starts on; blank and # lines dropped. Fields are sliced, not built char by char. */
-function splitCsv(text: string, problems: ImportProblem[]): { line: number; fields: string[] }[] {
-  const records: { line: number; fields: string[] }[] = [];
+/** Records with the line each starts on, one at a time; blank and # lines dropped. Fields are sliced, not built char by char. */
+function* csvRecords(text: string, problems: ImportProblem[]): Generator<{ line: number; fields: string[] }> {
   const source = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   const n = source.length;
   let line = 1;
@@ -175,9 +220,8 @@ function splitCsv(text: string, problems: ImportProblem[]): { line: number; fiel
       }
       break;
     }
-    records.push({ line: start, fields });
+    yield { line: start, fields };
   }
-  return records;
 }
 
 /**

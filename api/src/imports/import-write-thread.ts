@@ -28,13 +28,12 @@ export interface PartText {
 }
 
 export type ToWriter =
-  | { type: 'open'; title: string; summary: string; authorId: string }
+  | { type: 'open'; proposalId: string; title: string; summary: string; authorId: string }
   | { type: 'part'; part: PartText }
-  | { type: 'finish'; audit: { text: string; values: unknown[] } }
+  | { type: 'finish'; title: string; audit: { text: string; values: unknown[] } }
   | { type: 'abort' };
 
 export type FromWriter =
-  | { type: 'opened'; proposalId: string }
   | { type: 'written'; rows: number }
   | { type: 'finished'; items: number }
   | { type: 'aborted' }
@@ -73,7 +72,7 @@ async function run(start: WriterStart): Promise<void> {
 
   port.on('message', (message: ToWriter) => {
     if (message.type === 'open') {
-      void open(message);
+      open(message);
     } else if (message.type === 'part') {
       if (failure) return;
       const part = message.part;
@@ -98,7 +97,7 @@ async function run(start: WriterStart): Promise<void> {
         failure ??= error;
       });
     } else if (message.type === 'finish') {
-      void finish(message.audit);
+      void finish(message.title, message.audit);
     } else {
       void ready.then(() => queue).then(() => end('rollback')).catch(() => client.end().catch(() => undefined)).then(() => {
         send({ type: 'aborted' });
@@ -107,19 +106,18 @@ async function run(start: WriterStart): Promise<void> {
     }
   });
 
-  async function open(message: Extract<ToWriter, { type: 'open' }>): Promise<void> {
-    try {
+  /** The proposal, made once connected; the parts sent meanwhile wait for it. */
+  function open(message: Extract<ToWriter, { type: 'open' }>): void {
+    proposalId = message.proposalId;
+    queue = queue.then(async () => {
       await ready;
-      [{ id: proposalId }] = (await client.query(`INSERT INTO proposals (title, summary, author_id) VALUES ($1, $2, $3) RETURNING id`, [message.title.slice(0, 300), message.summary, message.authorId])).rows;
-      send({ type: 'opened', proposalId });
-    } catch (error) {
-      await client.end().catch(() => undefined);
-      send(failed(error));
-      port.close();
-    }
+      await client.query(`INSERT INTO proposals (id, title, summary, author_id) VALUES ($1, $2, $3, $4)`, [proposalId, message.title.slice(0, 300), message.summary, message.authorId]);
+    }).catch((error: Error) => {
+      failure ??= error;
+    });
   }
 
-  async function finish(audit: { text: string; values: unknown[] }): Promise<void> {
+  async function finish(title: string, audit: { text: string; values: unknown[] }): Promise<void> {
     try {
       await queue;
       if (failure) throw failure;
@@ -131,6 +129,8 @@ async function run(start: WriterStart): Promise<void> {
         const [{ rows }] = (await client.query(`SELECT count(*)::int AS rows FROM proposal_items WHERE proposal_id = $1`, [proposalId])).rows;
         if (rows !== checked) throw new SetBasedCheckError(`${rows} items written but the references of ${checked} checked`);
       }
+      // The title may name what only the end of the file told (how many values).
+      await client.query(`UPDATE proposals SET title = $2 WHERE id = $1 AND title <> $2`, [proposalId, title.slice(0, 300)]);
       await client.query(audit.text, audit.values);
       await end('commit');
       send({ type: 'finished', items: written });

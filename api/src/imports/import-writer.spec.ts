@@ -33,7 +33,7 @@ describe('bulk import writer (a thread of its own, one transaction)', () => {
 
   it('writes the parts in one transaction, with the audit entry, and reports progress', async () => {
     const writer = new ImportWriter(t.config.databaseUrl);
-    const proposalId = await writer.open(author, 'writer spec: two parts', 'made by a spec');
+    const proposalId = writer.begin(author, 'writer spec: two parts', 'made by a spec');
     const progress: number[] = [];
     writer.reportTo((n) => progress.push(n));
     const first = part([1, 2, 3]);
@@ -42,12 +42,14 @@ describe('bulk import writer (a thread of its own, one transaction)', () => {
     // Nothing is visible outside the writer's transaction before it commits.
     expect(await proposalRows(proposalId)).toBe(0);
     try {
-      expect(await writer.finish(author, { spec: true })).toBe(5);
+      expect(await writer.finish(author, 'writer spec: two parts, five values', { spec: true })).toBe(5);
       const items = await t.dataSource.query(`SELECT position, payload, species_id AS "speciesId" FROM proposal_items WHERE proposal_id = $1 ORDER BY position`, [proposalId]);
       expect(items.map((i: { position: number }) => i.position)).toEqual([1, 2, 3, 4, 5]);
       // The payload comes back as given, non-ASCII and escapes included.
       expect(items[0].payload).toEqual(first.items[0].payload);
       expect(items[0].speciesId).toBe(phase.speciesId);
+      const [proposal] = await t.dataSource.query(`SELECT title FROM proposals WHERE id = $1`, [proposalId]);
+      expect(proposal.title).toBe('writer spec: two parts, five values');
       const [audit] = await t.dataSource.query(`SELECT details FROM audit_entries WHERE action = 'proposal.create' AND entity_id = $1`, [proposalId]);
       expect(audit.details).toEqual({ spec: true, items: 5 });
       expect(progress.at(-1)).toBe(5);
@@ -58,25 +60,25 @@ describe('bulk import writer (a thread of its own, one transaction)', () => {
 
   it('rolls everything back when a part refers to a species phase that does not exist', async () => {
     const writer = new ImportWriter(t.config.databaseUrl);
-    const proposalId = await writer.open(author, 'writer spec: a missing reference', 'made by a spec');
+    const proposalId = writer.begin(author, 'writer spec: a missing reference', 'made by a spec');
     writer.write(part([1, 2]));
     writer.write(part([3], randomUUID()));
-    await expectAsync(writer.finish(author, {})).toBeRejectedWithError(/proposal_items_species_phase_id_fkey/);
+    await expectAsync(writer.finish(author, 'never kept', {})).toBeRejectedWithError(/proposal_items_species_phase_id_fkey/);
     expect(await proposalRows(proposalId)).toBe(0);
   });
 
   it('rolls back on abort, and refuses a part that repeats a position', async () => {
     const aborted = new ImportWriter(t.config.databaseUrl);
-    const abortedId = await aborted.open(author, 'writer spec: aborted', 'made by a spec');
+    const abortedId = aborted.begin(author, 'writer spec: aborted', 'made by a spec');
     aborted.write(part([1, 2]));
     await aborted.abort();
     expect(await proposalRows(abortedId)).toBe(0);
 
     const repeating = new ImportWriter(t.config.databaseUrl);
-    const repeatingId = await repeating.open(author, 'writer spec: a position twice', 'made by a spec');
+    const repeatingId = repeating.begin(author, 'writer spec: a position twice', 'made by a spec');
     repeating.write(part([1, 2]));
     repeating.write(part([2, 3]));
-    await expectAsync(repeating.finish(author, {})).toBeRejectedWithError(/proposal_items_position_unique/);
+    await expectAsync(repeating.finish(author, 'never kept', {})).toBeRejectedWithError(/proposal_items_position_unique/);
     expect(await proposalRows(repeatingId)).toBe(0);
   });
 
@@ -84,7 +86,8 @@ describe('bulk import writer (a thread of its own, one transaction)', () => {
     const unreachable = new URL(t.config.databaseUrl);
     unreachable.port = '9';
     const writer = new ImportWriter(unreachable.toString());
-    await expectAsync(writer.open(author, 'never made', 'never made')).toBeRejectedWith(jasmine.objectContaining({ code: 'ECONNREFUSED' }));
-    await writer.abort();
+    writer.begin(author, 'never made', 'never made');
+    writer.write(part([1]));
+    await expectAsync(writer.finish(author, 'never made', {})).toBeRejectedWith(jasmine.objectContaining({ code: 'ECONNREFUSED' }));
   });
 });

@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import path from 'node:path';
 import { Worker } from 'node:worker_threads';
 import type { Request } from 'express';
@@ -24,7 +25,7 @@ export class ImportWriter {
   private asked: { expected: FromWriter['type']; resolve: (message: FromWriter) => void; reject: (error: Error) => void } | null = null;
   private ended: Error | null = null;
 
-  /** Starts the writer's thread, which connects and begins the transaction meanwhile; `open` then makes the proposal. */
+  /** Starts the writer's thread, which connects and begins the transaction meanwhile; `begin` then makes the proposal. */
   constructor(databaseUrl: string) {
     const start: WriterStart = { databaseUrl };
     this.worker = new Worker(path.join(__dirname, 'import-write-thread.js'), { workerData: { kxImportWriter: start } });
@@ -48,11 +49,14 @@ export class ImportWriter {
     return this.proposal;
   }
 
-  /** Makes the draft proposal the items go to. */
-  async open(author: Principal, title: string, summary: string): Promise<string> {
-    const opened = (await this.ask({ type: 'open', title, summary, authorId: author.userId }, 'opened')) as Extract<FromWriter, { type: 'opened' }>;
-    this.proposal = opened.proposalId;
-    return opened.proposalId;
+  /**
+   * Makes the draft proposal the items go to, once the writer is connected; returns its id at
+   * once (the parts sent meanwhile wait for it). A failure surfaces in `finish`.
+   */
+  begin(author: Principal, title: string, summary: string): string {
+    this.proposal = randomUUID();
+    this.worker.postMessage({ type: 'open', proposalId: this.proposal, title, summary, authorId: author.userId } satisfies ToWriter);
+    return this.proposal;
   }
 
   /** Hears the number of items written after each part from now on. */
@@ -79,10 +83,10 @@ export class ImportWriter {
     this.worker.postMessage({ type: 'part', part: text } satisfies ToWriter);
   }
 
-  /** Waits for every part, checks the references, records the audit entry and commits; answers the items written. */
-  async finish(author: Principal, details: Record<string, unknown>, req?: Request): Promise<number> {
+  /** Waits for every part, checks the references, gives the proposal its final title, records the audit entry and commits; answers the items written. */
+  async finish(author: Principal, title: string, details: Record<string, unknown>, req?: Request): Promise<number> {
     const audit = auditInsert({ action: 'proposal.create', actor: author, entityType: 'proposal', entityId: this.proposalId, details: { ...details, items: this.sent } }, req);
-    const answer = (await this.ask({ type: 'finish', audit }, 'finished')) as Extract<FromWriter, { type: 'finished' }>;
+    const answer = (await this.ask({ type: 'finish', title, audit }, 'finished')) as Extract<FromWriter, { type: 'finished' }>;
     return answer.items;
   }
 
@@ -91,7 +95,7 @@ export class ImportWriter {
     await this.ask({ type: 'abort' }, 'aborted').catch(() => undefined);
   }
 
-  private ask(message: ToWriter, expected: 'opened' | 'finished' | 'aborted'): Promise<FromWriter> {
+  private ask(message: ToWriter, expected: 'finished' | 'aborted'): Promise<FromWriter> {
     if (this.ended) return Promise.reject(this.ended);
     return new Promise((resolve, reject) => {
       this.asked = { expected, resolve, reject };

@@ -190,6 +190,8 @@ describe('bulk import', () => {
     expect(job).toEqual(jasmine.objectContaining({ status: 'succeeded', processedRows: 4, totalRows: 4 }));
     const proposal = (await request(t.app).get(`/api/v1/proposals/${job.proposalId}`).set('Authorization', steward).expect(200)).body;
     expect(proposal.state).toBe('draft');
+    // The title counts the values, known only once the whole file was read.
+    expect(proposal.title).toBe('Import of solvents.csv (4 values)');
     expect(proposal.items.map((i: { kind: string }) => i.kind)).toEqual(['add_species', 'add_phase', 'add_phase', 'add_value', 'add_value', 'add_value', 'add_value']);
     expect(proposal.items[5].payload).toEqual(jasmine.objectContaining({ levelOfTheory: 'G4', method: 'computed' }));
     const after = await counts();

@@ -7,7 +7,7 @@ import { recordAudit } from '../audit/audit.service';
 import { CatalogueView } from '../proposals/proposal-subjects';
 import { NotFoundError, UnprocessableError, UnsupportedMediaTypeError } from '../shared/errors';
 import { safeFileName } from '../shared/uploads';
-import { decodeUtf8, parseCsv, parseXml, type ImportProblem, type ImportRow } from './import-files';
+import { csvRows, decodeUtf8, parseXml, rowsOf, type ImportProblem, type RowReader } from './import-files';
 import { checkDraft, draftImport, importReferences, newImportState, speciesNamesIn, type ImportSources, type PreparedImport } from './import-rows';
 import { ImportWriter } from './import-writer';
 
@@ -67,21 +67,13 @@ export class ImportsService {
     let handedOver = false;
     try {
       const decoded = decodeUtf8(file.buffer);
-      const parsed = 'problem' in decoded ? { rows: [], problems: [decoded.problem], records: 0 } : format === 'csv' ? parseCsv(decoded.text) : parseXml(decoded.text);
-      const problems: ImportProblem[] = [...parsed.problems];
-      if (parsed.rows.length > MAX_IMPORT_ROWS) problems.push({ line: 1, message: `at most ${MAX_IMPORT_ROWS} rows per file (this one has ${parsed.rows.length})` });
-      if (parsed.rows.length === 0 && problems.length === 0) problems.push({ line: 1, message: 'the file holds no rows of values' });
-
+      const reader = 'problem' in decoded ? rowsOf({ rows: [], problems: [decoded.problem], records: 0 })
+        : format === 'csv' ? csvRows(decoded.text) : rowsOf(parseXml(decoded.text));
       const jobId = randomUUID();
-      // Every row is one value, so a file without problems makes as many values as it has rows.
-      const title = options.title?.trim() || `Import of ${fileName} (${parsed.rows.length} value${parsed.rows.length === 1 ? '' : 's'})`;
-      const writing = writer && problems.length === 0 ? writer : null;
-      await writing?.open(user, title, `Created by bulk import ${jobId}.`);
-      const checked = problems.length === 0 || parsed.rows.length > 0
-        ? await this.check(parsed.rows, writing)
-        : { problems: [], counts: { species: 0, phases: 0, values: 0 } };
-      problems.push(...checked.problems);
-      problems.sort((a, b) => a.line - b.line);
+      const writing = writer && reader.problems.length === 0 ? writer : null;
+      writing?.begin(user, options.title?.trim() || `Import of ${fileName}`, `Created by bulk import ${jobId}.`);
+      const checked = await this.check(reader, writing);
+      const problems = checked.problems;
       const checkedMs = Date.now() - started;
 
       const job = await this.ctx.dataSource.transaction(async (m) => {
@@ -89,24 +81,25 @@ export class ImportsService {
           `INSERT INTO import_jobs (id, created_by, file_name, format, dry_run, status, total_rows, processed_rows, error_count, errors, started_at, finished_at)
            VALUES ($10, $1, $2, $3, $4, $5, $6, $7, $8, $9, now(), CASE WHEN $5 IN ('succeeded', 'failed') THEN now() END) RETURNING id`,
           [user.userId, fileName, format, options.dryRun, options.dryRun ? 'succeeded' : problems.length > 0 ? 'failed' : 'running',
-            parsed.records, options.dryRun || problems.length > 0 ? parsed.records : 0, problems.length, JSON.stringify(problems.slice(0, STORED_PROBLEMS)), jobId],
+            reader.records, options.dryRun || problems.length > 0 ? reader.records : 0, problems.length, JSON.stringify(problems.slice(0, STORED_PROBLEMS)), jobId],
         );
         await recordAudit(m, {
           action: options.dryRun ? 'import.dry_run' : 'import.start', actor: user, entityType: 'import_job', entityId: row.id,
-          details: { fileName, format, rows: parsed.rows.length, problems: problems.length },
+          details: { fileName, format, rows: checked.rows, problems: problems.length },
         }, req);
         return row.id as string;
       });
-      const summary = { rows: parsed.records, wouldCreate: checked.counts, checkedInMs: checkedMs };
+      const summary = { rows: reader.records, wouldCreate: checked.counts, checkedInMs: checkedMs };
 
       if (options.dryRun) return { status: 200, body: { ...(await this.get(user, job)), errors: problems, ...summary } };
       if (problems.length > 0) {
         throw new UnprocessableError(`${problems.length} problem${problems.length === 1 ? '' : 's'} in ${fileName}; nothing was imported: ${problems.slice(0, 3).map((p) => `line ${p.line}${p.field ? ` (${p.field})` : ''}: ${p.message}`).join('; ')}${problems.length > 3 ? '; …' : ''}`, { jobId: job, problems });
       }
 
-      const rows = parsed.rows.length;
+      // Every row is one value, so the title can now say how many.
+      const title = options.title?.trim() || `Import of ${fileName} (${checked.rows} value${checked.rows === 1 ? '' : 's'})`;
       const items = checked.counts.species + checked.counts.phases + checked.counts.values;
-      writing!.reportTo((written) => this.progress(job, Math.floor((rows * written) / Math.max(1, items))));
+      writing!.reportTo((written) => this.progress(job, Math.floor((reader.records * written) / Math.max(1, items))));
       handedOver = true;
       const work = this.finish(user, job, writing!, file, fileName, format, title, req)
         .catch((error: Error) => this.fail(job, error))
@@ -119,41 +112,43 @@ export class ImportsService {
   }
 
   /**
-   * Checks the rows part by part against just the part of the catalogue they name: the species
-   * their formulas and names can mean, then the species the items name by name (those the import
-   * adds, to see clashes with species of other formulas). The next part's species are fetched while
-   * a part is checked; each part without problems (while no part had any) goes to `writer`.
+   * Reads and checks the rows part by part against just the part of the catalogue they name: the
+   * species their formulas and names can mean, then the species the items name by name (those the
+   * import adds, to see clashes with species of other formulas). The next part is read and its
+   * species fetched while a part is checked; each part goes to `writer` while no problem is known.
+   * Answers every problem, in line order.
    */
-  private async check(rows: ImportRow[], writer: ImportWriter | null): Promise<{ problems: ImportProblem[]; counts: PreparedImport['counts'] }> {
+  private async check(reader: RowReader, writer: ImportWriter | null): Promise<{ problems: ImportProblem[]; counts: PreparedImport['counts']; rows: number }> {
     const manager = this.ctx.dataSource.manager;
     const catalogue = new CatalogueView();
     const sources: ImportSources = { byKey: new Map(), byDoi: new Map() };
     const state = newImportState();
     const problems: ImportProblem[] = [];
     const counts = { species: 0, phases: 0, values: 0 };
-    const fetch = async (part: ImportRow[]) => {
+    let rows = 0;
+    const read = async (max: number) => {
+      const part = reader.next(max);
       const references = importReferences(part);
       await Promise.all([this.loadSources(manager, references.sourceKeys, references.dois, sources), catalogue.loadSpeciesOfFormulas(manager, references)]);
-      return references;
+      return { part, references };
     };
-    // The first part is small, so that the database starts writing soon.
-    const endOf = (start: number) => Math.min(rows.length, start === 0 ? STEP_ROWS : start + PART_ROWS);
-    let next = fetch(rows.slice(0, endOf(0)));
+    const problemFree = () => problems.length === 0 && reader.problems.length === 0 && rows <= MAX_IMPORT_ROWS;
     let unwritten: PreparedImport[] = [];
     const flush = () => {
-      if (writer && problems.length === 0 && unwritten.length > 0) writer.write(joinParts(unwritten));
+      if (writer && problemFree() && unwritten.length > 0) writer.write(joinParts(unwritten));
       unwritten = [];
     };
-    for (let start = 0; start < rows.length; start = endOf(start)) {
-      const end = endOf(start);
-      const references = await next;
-      if (end < rows.length) {
-        next = fetch(rows.slice(end, endOf(end)));
-        // Awaited in the next round; until then a failure must not count as unhandled.
-        next.catch(() => undefined);
-      }
-      for (let at = start; at < end; at += STEP_ROWS) {
-        const draft = draftImport(rows.slice(at, Math.min(at + STEP_ROWS, end)), references, catalogue, sources, state);
+    // The first part is small, so that the database starts writing soon.
+    let next = read(STEP_ROWS);
+    for (;;) {
+      const { part, references } = await next;
+      if (part.length === 0) break;
+      rows += part.length;
+      next = read(PART_ROWS);
+      // Awaited in the next round; until then a failure must not count as unhandled.
+      next.catch(() => undefined);
+      for (let at = 0; at < part.length; at += STEP_ROWS) {
+        const draft = draftImport(part.slice(at, at + STEP_ROWS), references, catalogue, sources, state);
         await catalogue.loadSpeciesNamed(manager, speciesNamesIn(draft));
         const prepared = checkDraft(draft, catalogue, state);
         problems.push(...prepared.problems);
@@ -161,12 +156,16 @@ export class ImportsService {
         counts.phases += prepared.counts.phases;
         counts.values += prepared.counts.values;
         unwritten.push(prepared);
-        // A turn of the event loop now and then, so the COPYs queued before go on meanwhile.
+        // A turn of the event loop now and then, for the writer's messages and the next part's species.
         await new Promise((resolve) => setImmediate(resolve));
       }
       flush();
     }
-    return { problems, counts };
+    problems.push(...reader.problems);
+    if (rows > MAX_IMPORT_ROWS) problems.push({ line: 1, message: `at most ${MAX_IMPORT_ROWS} rows per file (this one has ${rows})` });
+    if (rows === 0 && problems.length === 0) problems.push({ line: 1, message: 'the file holds no rows of values' });
+    problems.sort((a, b) => a.line - b.line);
+    return { problems, counts, rows };
   }
 
   /** Adds to `into` the sources the rows name by key or DOI and `into` does not hold yet. */
@@ -189,7 +188,7 @@ export class ImportsService {
   private async finish(user: Principal, jobId: string, writer: ImportWriter, file: Express.Multer.File, fileName: string, format: 'csv' | 'xml', title: string, req: Request): Promise<void> {
     // The file is kept beside the import (when an object store is configured) while the transaction ends.
     const [items] = await Promise.all([
-      writer.finish(user, { title, importJobId: jobId }, req),
+      writer.finish(user, title, { title, importJobId: jobId }, req),
       this.ctx.store?.put(`imports/${jobId}/${fileName}`, file.buffer, format === 'csv' ? 'text/csv' : 'application/xml').catch(() => undefined),
     ]);
     await this.ctx.dataSource.query(

@@ -44,6 +44,14 @@ describe('COPY text', () => {
     ]);
   });
 
+  it('writes JSON text as UTF-8 that PostgreSQL reads back as the same values', async () => {
+    const text = new CopyTextBuilder();
+    tricky.forEach((payload, i) => text.word(i + 1).jsonText(JSON.stringify(payload)).endRow());
+    await copyPieces(client, 'kx_spec_copy', ['position', 'payload'], text.finish());
+    const { rows } = await client.query(`SELECT payload FROM kx_spec_copy ORDER BY position`);
+    expect(rows.map((r: { payload: unknown }) => r.payload)).toEqual(tricky);
+  });
+
   it('starts a new piece when one fills up; a row may run across two, as COPY allows', async () => {
     const text = new CopyTextBuilder();
     const long = 'x'.repeat(300_000);

@@ -133,9 +133,15 @@ export class CopyTextBuilder {
     return this.put(copyJsonField(value));
   }
 
-  /** A jsonb field from JSON text (`copyJsonText`). */
+  /** A jsonb field from JSON text, written as UTF-8. */
   jsonText(text: string): this {
-    return this.put(copyJsonText(text));
+    // JSON text holds no raw newline or tab; its backslashes are COPY's escape character.
+    const escaped = text.includes('\\') ? text.replace(/\\/g, '\\\\') : text;
+    this.reserve(escaped.length * 3 + 1);
+    if (!this.startOfRow) this.buffer[this.at++] = 9;
+    this.startOfRow = false;
+    this.at += this.buffer.write(escaped, this.at, 'utf8');
+    return this;
   }
 
   endRow(): void {
