@@ -144,6 +144,19 @@ function formulaReader() {
   };
 }
 
+/** `read` answering each text once: files repeat a few pressures and temperatures on every row. */
+function remembered<T>(read: (text: string) => T): { read: (text: string) => T } {
+  const answers = new Map<string, T>();
+  return {
+    read(text) {
+      if (answers.has(text)) return answers.get(text) as T;
+      const answer = read(text);
+      answers.set(text, answer);
+      return answer;
+    },
+  };
+}
+
 /** The formulas and sources the rows name, so that only those are loaded to check them. */
 export function importReferences(rows: ImportRow[]): ImportReferences {
   const formulas = formulaReader();
@@ -200,6 +213,10 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
   const phasesBefore = newPhases.size;
   const valueItems: DraftImport['values'] = [];
   const { formulas } = references;
+  // Within one part: the species phase each (formula, name, phase, polymorph) was found to be, and texts read once.
+  const phaseOfSubject = new Map<string, string>();
+  const pressures = remembered(readPressure);
+  const temperatures = remembered(readTemperature);
 
   for (const row of rows) {
     const f = row.fields;
@@ -214,10 +231,10 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
     else if (!quantity) problem('quantity', `quantity must be dfH, S, Cp, dfG or dtrsH (or ΔfH°, S°, Cp°, ΔfG°, ΔtrsH), got "${f.quantity}"`);
     if (!f.phase) problem('phase', `phase is required (${PHASE_CODES.join(', ')})`);
     else if (!(PHASE_CODES as readonly string[]).includes(f.phase)) problem('phase', `phase must be one of ${PHASE_CODES.join(', ')}, got "${f.phase}"`);
-    const pressure = f.pressure === undefined ? undefined : readPressure(f.pressure);
+    const pressure = f.pressure === undefined ? undefined : pressures.read(f.pressure);
     if (f.pressure === undefined) problem('pressure', 'pressure is required: the standard pressure the value is given at (100000 Pa, 1 bar, 101325 Pa or 1 atm)');
     else if (pressure === undefined) problem('pressure', `pressure must be a number of Pa, or with kPa, bar or atm, got "${f.pressure}"`);
-    const temperature = f.temperature === undefined ? 298.15 : readTemperature(f.temperature);
+    const temperature = f.temperature === undefined ? 298.15 : temperatures.read(f.temperature);
     if (temperature === undefined) problem('temperature', `temperature must be a number of K, got "${f.temperature}"`);
 
     let sourceId: string | undefined;
@@ -233,23 +250,30 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
 
     if (problems.length > before || !parsed?.ok || !quantity) continue;
 
-    // Which species: the formula as written, else the same Hill formula and charge; a name narrows it down or adds a species.
-    const formula = parsed.formula;
-    const hill = formulas.hill(formula);
-    const sameFormula = byHill.get(`${hill}|${formula.charge}`) ?? [];
-    const named = f.name ? sameFormula.filter((s) => [s.name, ...s.synonyms].some((n) => n.toLowerCase() === f.name!.toLowerCase())) : sameFormula;
-    const exact = named.filter((s) => s.formula === f.formula);
-    const candidates = exact.length === 1 ? exact : named;
     const phase = f.phase as PhaseCode;
     const polymorph = f.polymorph ?? null;
     let subject: Record<string, unknown>;
     let phaseKey: string;
-    if (candidates.length === 1) {
+    // Files give many values of one species phase on consecutive rows: a phase found once is found again at once.
+    const subjectKey = `${f.formula}\u0000${f.name ?? ''}\u0000${phase}\u0000${polymorph ?? ''}`;
+    const knownPhase = phaseOfSubject.get(subjectKey);
+    // Which species: the formula as written, else the same Hill formula and charge; a name narrows it down or adds a species.
+    const formula = parsed.formula;
+    const hill = knownPhase ? '' : formulas.hill(formula);
+    const sameFormula = knownPhase ? [] : byHill.get(`${hill}|${formula.charge}`) ?? [];
+    const named = f.name ? sameFormula.filter((s) => [s.name, ...s.synonyms].some((n) => n.toLowerCase() === f.name!.toLowerCase())) : sameFormula;
+    const exact = named.filter((s) => s.formula === f.formula);
+    const candidates = exact.length === 1 ? exact : named;
+    if (knownPhase) {
+      subject = { speciesPhaseId: knownPhase };
+      phaseKey = knownPhase;
+    } else if (candidates.length === 1) {
       const species = candidates[0];
       const existing = catalogue.phaseOf(species.id, phase, polymorph);
       if (existing) {
         subject = { speciesPhaseId: existing.id };
         phaseKey = existing.id;
+        phaseOfSubject.set(subjectKey, existing.id);
       } else {
         phaseKey = `${species.id}|${phase}|${polymorph ?? ''}`;
         if (!newPhases.has(phaseKey)) {
