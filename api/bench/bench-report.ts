@@ -79,6 +79,9 @@ export function printTable(results: BenchResults): void {
   if (im.api) {
     console.log(`Bulk import (POST /api/v1/imports?dryRun=false, ${im.rows?.toLocaleString('en')} CSV rows, ${((im.fileBytes ?? 0) / 1e6).toFixed(1)} MB): ${im.api.seconds} s to ${im.api.jobStatus} ` +
       `(202 after ${im.api.acceptedSeconds} s) = ${im.api.rowsPerSecond.toLocaleString('en')} rows/s; server RSS ${im.api.rssBeforeMb} → peak ${im.api.rssPeakMb} MB`);
+    if (im.runs && im.runs.length > 1) {
+      console.log(`  the median of ${im.runs.length} runs: ${im.runs.map((r) => `${r.seconds} s (${r.rowsPerSecond.toLocaleString('en')} rows/s)`).join(', ')}`);
+    }
     if (im.copy) {
       console.log(`  PostgreSQL COPY FROM of the same ${im.copy.rows.toLocaleString('en')} ${im.copy.table} rows, a foreign-key trigger per row: ${im.copy.seconds} s = ${im.copy.rowsPerSecond.toLocaleString('en')} rows/s`);
       if (im.copy.setBased) console.log(`  PostgreSQL COPY FROM of the same rows with the import's set-based check (row triggers off, one check): ${im.copy.setBased.seconds} s = ${im.copy.setBased.rowsPerSecond.toLocaleString('en')} rows/s`);
