@@ -5,9 +5,10 @@ import { checkDeferrableUniques, checkForeignKeys, rowTriggers, SetBasedCheckErr
 
 /**
  * The bulk import's writer, on a thread of its own: one connection, one transaction. The request's
- * thread checks the rows and sends the COPY text of each checked part here; this thread keeps the
- * connection busy meanwhile, so the database writes while the API checks (on one thread the COPY
- * would only move when the checking paused). Messages: see `ToWriter` and `FromWriter`.
+ * thread checks the rows and sends each checked part here (its payloads as JSON text); this thread
+ * builds the part's COPY text and keeps the connection busy, so the database writes while the API
+ * checks (on one thread the COPY would only move when the checking paused). Messages: see
+ * `ToWriter` and `FromWriter`.
  */
 
 export const ITEM_COLUMNS = ['id', 'proposal_id', 'position', 'kind', 'payload', 'source_id', 'species_id', 'species_phase_id'] as const;
