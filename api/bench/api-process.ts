@@ -1,5 +1,5 @@
 import { spawn, type ChildProcess } from 'node:child_process';
-import { mkdtempSync, readFileSync } from 'node:fs';
+import { createWriteStream, mkdtempSync, readFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { anyFreePort } from '../tools/free-port';
@@ -44,10 +44,18 @@ export async function startApi(databaseUrl: string, options: { captureFile?: str
   }
   // A CPU profile of the API, written when it stops (open it in Chrome's DevTools).
   if (process.env.KELVINDEX_BENCH_PROFILE_DIR) args.unshift('--cpu-prof', `--cpu-prof-dir=${process.env.KELVINDEX_BENCH_PROFILE_DIR}`);
+  // Flags for the API's node (--trace-gc, --max-semi-space-size=…), to try a setting without a rebuild.
+  if (process.env.KELVINDEX_BENCH_API_NODE_ARGS) args.unshift(...process.env.KELVINDEX_BENCH_API_NODE_ARGS.split(/\s+/).filter(Boolean));
   const child = spawn(process.execPath, args, { cwd: root, env, stdio: ['ignore', 'pipe', 'pipe'] });
   let output = '';
   child.stdout!.on('data', (chunk: Buffer) => (output += chunk.toString()));
   child.stderr!.on('data', (chunk: Buffer) => (output += chunk.toString()));
+  // The API's own output (with NODE_OPTIONS=--trace-gc, say), kept in a file for a closer look.
+  if (process.env.KELVINDEX_BENCH_API_LOG) {
+    const log = createWriteStream(process.env.KELVINDEX_BENCH_API_LOG, { flags: 'a' });
+    child.stdout!.pipe(log, { end: false });
+    child.stderr!.pipe(log, { end: false });
+  }
   const url = `http://127.0.0.1:${port}`;
   await waitForHealth(url, child, () => output);
   return {

@@ -201,13 +201,6 @@ export function speciesNamesIn(draft: DraftImport): string[] {
  */
 export function draftImport(rows: ImportRow[], references: ImportReferences, catalogue: CatalogueView, sources: ImportSources, state = newImportState()): DraftImport {
   const problems: ImportProblem[] = [];
-  const byHill = new Map<string, CatalogueSpecies[]>();
-  for (const s of catalogue.speciesById.values()) {
-    const key = `${s.hillFormula}|${s.charge}`;
-    const group = byHill.get(key);
-    if (group) group.push(s);
-    else byHill.set(key, [s]);
-  }
   const { newSpecies, newPhases } = state;
   const speciesBefore = newSpecies.size;
   const phasesBefore = newPhases.size;
@@ -252,58 +245,23 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
 
     const phase = f.phase as PhaseCode;
     const polymorph = f.polymorph ?? null;
-    let subject: Record<string, unknown>;
-    let phaseKey: string;
     // Files give many values of one species phase on consecutive rows: a phase found once is found again at once.
     const subjectKey = `${f.formula}\u0000${f.name ?? ''}\u0000${phase}\u0000${polymorph ?? ''}`;
     const knownPhase = phaseOfSubject.get(subjectKey);
-    // Which species: the formula as written, else the same Hill formula and charge; a name narrows it down or adds a species.
-    const formula = parsed.formula;
-    const hill = knownPhase ? '' : formulas.hill(formula);
-    const sameFormula = knownPhase ? [] : byHill.get(`${hill}|${formula.charge}`) ?? [];
-    const named = f.name ? sameFormula.filter((s) => [s.name, ...s.synonyms].some((n) => n.toLowerCase() === f.name!.toLowerCase())) : sameFormula;
-    const exact = named.filter((s) => s.formula === f.formula);
-    const candidates = exact.length === 1 ? exact : named;
-    if (knownPhase) {
-      subject = { speciesPhaseId: knownPhase };
-      phaseKey = knownPhase;
-    } else if (candidates.length === 1) {
-      const species = candidates[0];
-      const existing = catalogue.phaseOf(species.id, phase, polymorph);
-      if (existing) {
-        subject = { speciesPhaseId: existing.id };
-        phaseKey = existing.id;
-        phaseOfSubject.set(subjectKey, existing.id);
-      } else {
-        phaseKey = `${species.id}|${phase}|${polymorph ?? ''}`;
-        if (!newPhases.has(phaseKey)) {
-          const item = { id: timeOrderedId(), position: 0, kind: 'add_phase' as const, payload: { speciesId: species.id, phase, ...(polymorph ? { polymorph } : {}) }, sourceId: null };
-          newPhases.set(phaseKey, { item, line: row.line });
-        }
-        subject = { speciesId: species.id, phase, ...(polymorph ? { polymorph } : {}) };
-      }
-    } else if (candidates.length > 1) {
-      problem(f.name ? 'name' : 'formula', `${f.formula} matches ${candidates.length} species (${candidates.map((c) => c.name).join(', ')}); give the name`);
+    const found = knownPhase ? { subject: { speciesPhaseId: knownPhase }, phaseKey: knownPhase }
+      : subjectOfRow(row, parsed.formula, phase, polymorph, formulas, catalogue, state);
+    if ('problem' in found) {
+      problems.push(found.problem);
       continue;
-    } else if (!f.name) {
-      problem('name', `${f.formula} (${hill}) is not in the catalogue; give its name to add it`);
-      continue;
-    } else {
-      const speciesKey = `${hill}|${formula.charge}|${f.name.toLowerCase()}`;
-      if (!newSpecies.has(speciesKey)) {
-        newSpecies.set(speciesKey, { item: { id: timeOrderedId(), position: 0, kind: 'add_species', payload: { formula: f.formula, name: f.name }, sourceId: null }, line: row.line });
-      }
-      phaseKey = `${speciesKey}|${phase}|${polymorph ?? ''}`;
-      if (!newPhases.has(phaseKey)) {
-        newPhases.set(phaseKey, { item: { id: timeOrderedId(), position: 0, kind: 'add_phase', payload: { species: f.name, phase, ...(polymorph ? { polymorph } : {}) }, sourceId: null }, line: row.line });
-      }
-      subject = { species: f.name, phase, ...(polymorph ? { polymorph } : {}) };
     }
+    const { subject, phaseKey } = found;
+    if (!knownPhase && 'speciesPhaseId' in subject) phaseOfSubject.set(subjectKey, phaseKey);
 
     // The same quantity of one species phase from one source twice, at the same temperature, is a repeat (Cp at several T is not).
     const duplicateKey = `${phaseKey}|${quantity}|${f.transition ?? ''}|${sourceId}|${temperature}`;
 
     const computed = f.method === 'computed';
+    // A subject is made afresh for each row, so it can become the payload.
     const payload: Record<string, unknown> = subject;
     payload.quantity = quantity;
     if (f.transition) payload.transitionKind = f.transition;
@@ -331,6 +289,48 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
     items: ordered.map((e) => e.item), lines: ordered.map((e) => e.line), values: valueItems, problems,
     counts: { species: newSpecies.size - speciesBefore, phases: newPhases.size - phasesBefore, values: valueItems.length },
   };
+}
+
+/**
+ * The species phase a row is about: one in the catalogue (by id), or one the import adds (by
+ * species id or name, with an add_phase item and, for a new species, an add_species item made
+ * here once); or the problem why the row names none. Which species: the formula as written, else
+ * the same Hill formula and charge; a name narrows them down, or adds a species.
+ */
+function subjectOfRow(row: ImportRow, formula: ParsedFormulaOf, phase: PhaseCode, polymorph: string | null, formulas: FormulaReader, catalogue: CatalogueView, state: ImportState):
+  { subject: Record<string, unknown>; phaseKey: string } | { problem: ImportProblem } {
+  const f = row.fields;
+  const { newSpecies, newPhases } = state;
+  const hill = formulas.hill(formula);
+  const sameFormula = catalogue.speciesOfFormula(hill, formula.charge);
+  const wantedName = f.name?.toLowerCase();
+  const named = wantedName === undefined ? sameFormula : sameFormula.filter((s) => s.name.toLowerCase() === wantedName || s.synonyms.some((n) => n.toLowerCase() === wantedName));
+  const exact = named.filter((s) => s.formula === f.formula);
+  const candidates = exact.length === 1 ? exact : named;
+  if (candidates.length > 1) {
+    return { problem: { line: row.line, field: f.name ? 'name' : 'formula', message: `${f.formula} matches ${candidates.length} species (${candidates.map((c) => c.name).join(', ')}); give the name` } };
+  }
+  const withPolymorph = polymorph ? { polymorph } : {};
+  if (candidates.length === 1) {
+    const species = candidates[0];
+    const existing = catalogue.phaseOf(species.id, phase, polymorph);
+    if (existing) return { subject: { speciesPhaseId: existing.id }, phaseKey: existing.id };
+    const phaseKey = `${species.id}|${phase}|${polymorph ?? ''}`;
+    if (!newPhases.has(phaseKey)) {
+      newPhases.set(phaseKey, { item: { id: timeOrderedId(), position: 0, kind: 'add_phase', payload: { speciesId: species.id, phase, ...withPolymorph }, sourceId: null }, line: row.line });
+    }
+    return { subject: { speciesId: species.id, phase, ...withPolymorph }, phaseKey };
+  }
+  if (!f.name) return { problem: { line: row.line, field: 'name', message: `${f.formula} (${hill}) is not in the catalogue; give its name to add it` } };
+  const speciesKey = `${hill}|${formula.charge}|${f.name.toLowerCase()}`;
+  if (!newSpecies.has(speciesKey)) {
+    newSpecies.set(speciesKey, { item: { id: timeOrderedId(), position: 0, kind: 'add_species', payload: { formula: f.formula, name: f.name }, sourceId: null }, line: row.line });
+  }
+  const phaseKey = `${speciesKey}|${phase}|${polymorph ?? ''}`;
+  if (!newPhases.has(phaseKey)) {
+    newPhases.set(phaseKey, { item: { id: timeOrderedId(), position: 0, kind: 'add_phase', payload: { species: f.name, phase, ...withPolymorph }, sourceId: null }, line: row.line });
+  }
+  return { subject: { species: f.name, phase, ...withPolymorph }, phaseKey };
 }
 
 /**

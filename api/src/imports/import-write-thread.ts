@@ -4,18 +4,15 @@ import { CopyTextBuilder, copyPieces } from '../shared/copy-rows';
 import { checkDeferrableUniques, checkForeignKeys, rowTriggers, SetBasedCheckError, setBasedChecksPossible, type TableChecks } from '../shared/set-based-checks';
 
 /**
- * The bulk import's writer, on a thread of its own: one connection, one transaction. The request's
- * thread checks the rows and sends each checked part here (its payloads as JSON text); this thread
- * builds the part's COPY text and keeps the connection busy, so the database writes while the API
- * checks (on one thread the COPY would only move when the checking paused). Messages: see
- * `ToWriter` and `FromWriter`.
+ * The bulk imports' writer, on a thread of its own that lives as long as the API (starting a
+ * thread and compiling this code again for every import cost more than a tenth of a second). Each
+ * import is a session here: one connection, one transaction. The request's thread checks the rows
+ * and sends each checked part (its payloads as JSON text); this thread builds the part's COPY text
+ * and keeps the connection busy, so the database writes while the API checks (on one thread the
+ * COPY would only move when the checking paused). Messages: see `ToWriter` and `FromWriter`.
  */
 
 export const ITEM_COLUMNS = ['id', 'proposal_id', 'position', 'kind', 'payload', 'source_id', 'species_id', 'species_phase_id'] as const;
-
-export interface WriterStart {
-  databaseUrl: string;
-}
 
 /** A checked part's items, column by column, in position order; payloads as JSON text. */
 export interface PartText {
@@ -28,124 +25,152 @@ export interface PartText {
   speciesPhaseIds: (string | null)[];
 }
 
-export type ToWriter =
+/** Every message names the import (session) it belongs to. */
+export type ToWriter = { session: string } & (
+  | { type: 'connect'; databaseUrl: string }
   | { type: 'open'; proposalId: string; title: string; summary: string; authorId: string }
   | { type: 'part'; part: PartText }
   | { type: 'finish'; title: string; audit: { text: string; values: unknown[] } }
-  | { type: 'abort' };
+  | { type: 'abort' }
+);
 
-export type FromWriter =
+export type FromWriter = { session: string } & (
   | { type: 'written'; rows: number }
   | { type: 'finished'; items: number }
   | { type: 'aborted' }
-  | { type: 'failed'; message: string; code?: string };
+  | { type: 'failed'; message: string; code?: string }
+);
 
-if (parentPort && workerData?.kxImportWriter) void run(workerData.kxImportWriter as WriterStart);
+type Reply = FromWriter extends infer M ? (M extends { session: string } ? Omit<M, 'session'> : never) : never;
 
-async function run(start: WriterStart): Promise<void> {
+if (parentPort && workerData?.kxImportWriter) serve();
+
+function serve(): void {
   const port = parentPort!;
-  const send = (message: FromWriter) => port.postMessage(message);
-  let checks: TableChecks | null = null;
-  let proposalId = '';
-  /** the parts' COPY statements and checks, one after another */
-  let queue: Promise<void> = Promise.resolve();
-  let failure: Error | null = null;
-  let written = 0;
-  let checked = 0;
-  const client = new Client({ connectionString: start.databaseUrl, connectionTimeoutMillis: 5000 });
-  // A connection lost between statements: the next statement fails with it; keep the first cause.
-  client.on('error', (error) => {
-    failure ??= error;
-  });
-
-  const end = async (outcome: 'commit' | 'rollback') => {
-    await client.query(outcome === 'commit' ? 'COMMIT' : 'ROLLBACK').finally(() => client.end().catch(() => undefined));
-  };
-
-  // Connected and in a transaction while the request's thread still reads the file.
-  const ready = (async () => {
-    await client.connect();
-    await client.query('BEGIN');
-    checks = await setBasedChecksPossible(client, 'proposal_items');
-    if (checks) await rowTriggers(client, 'off');
-  })();
-  ready.catch(() => undefined);
-
+  const sessions = new Map<string, WriterSession>();
   port.on('message', (message: ToWriter) => {
-    if (message.type === 'open') {
-      open(message);
-    } else if (message.type === 'part') {
-      if (failure) return;
-      const part = message.part;
-      // The COPY text is built as soon as the part arrives, while the database takes the part before it.
-      const text = new CopyTextBuilder();
-      // Ids, positions and kinds are the API's own (uuids, integers, vocabulary words): nothing to escape.
-      for (let i = 0; i < part.ids.length; i++) {
-        text.word(part.ids[i]).word(proposalId).word(part.positions[i]).word(part.kinds[i]).jsonText(part.payloads[i])
-          .word(part.sourceIds[i]).word(part.speciesIds[i]).word(part.speciesPhaseIds[i]).endRow();
-      }
-      const rows = text.rows;
-      const pieces = text.finish();
-      const range = { column: 'position', from: part.positions[0], to: part.positions[part.positions.length - 1] };
-      // Each part after the one before it: its COPY, then the check of its references.
-      queue = queue.then(async () => {
-        if (failure) return;
-        await copyPieces(client, 'proposal_items', ITEM_COLUMNS, pieces);
-        if (checks) checked += await checkForeignKeys(client, checks, ITEM_COLUMNS, { column: 'proposal_id', value: proposalId, range });
-        written += rows;
-        send({ type: 'written', rows: written });
-      }).catch((error: Error) => {
-        failure ??= error;
-      });
-    } else if (message.type === 'finish') {
-      void finish(message.title, message.audit);
-    } else {
-      void ready.then(() => queue).then(() => end('rollback')).catch(() => client.end().catch(() => undefined)).then(() => {
-        send({ type: 'aborted' });
-        port.close();
-      });
+    if (message.type === 'connect') {
+      const reply = (answer: Reply) => port.postMessage({ ...answer, session: message.session });
+      sessions.set(message.session, new WriterSession(message.databaseUrl, reply, () => sessions.delete(message.session)));
+      return;
     }
+    const session = sessions.get(message.session);
+    if (!session) return;
+    if (message.type === 'open') session.open(message);
+    else if (message.type === 'part') session.write(message.part);
+    else if (message.type === 'finish') void session.finish(message.title, message.audit);
+    else void session.abort();
   });
+}
+
+/** One import: its connection and transaction, the parts queued on it, and how far they got. */
+class WriterSession {
+  private readonly client: Client;
+  /** connected, in the transaction, and the way of checking references known */
+  private readonly ready: Promise<void>;
+  private checks: TableChecks | null = null;
+  private proposalId = '';
+  /** the parts' COPY statements and checks, one after another */
+  private queue: Promise<void> = Promise.resolve();
+  private failure: Error | null = null;
+  private written = 0;
+  private checked = 0;
+
+  constructor(databaseUrl: string, private readonly reply: (answer: Reply) => void, private readonly ended: () => void) {
+    this.client = new Client({ connectionString: databaseUrl, connectionTimeoutMillis: 5000 });
+    // A connection lost between statements: the next statement fails with it; keep the first cause.
+    this.client.on('error', (error) => {
+      this.failure ??= error;
+    });
+    // Connected and in a transaction while the request's thread still reads the file.
+    this.ready = (async () => {
+      await this.client.connect();
+      await this.client.query('BEGIN');
+      this.checks = await setBasedChecksPossible(this.client, 'proposal_items');
+      if (this.checks) await rowTriggers(this.client, 'off');
+    })();
+    this.ready.catch(() => undefined);
+  }
 
   /** The proposal, made once connected; the parts sent meanwhile wait for it. */
-  function open(message: Extract<ToWriter, { type: 'open' }>): void {
-    proposalId = message.proposalId;
-    queue = queue.then(async () => {
-      await ready;
-      await client.query(`INSERT INTO proposals (id, title, summary, author_id) VALUES ($1, $2, $3, $4)`, [proposalId, message.title.slice(0, 300), message.summary, message.authorId]);
-    }).catch((error: Error) => {
-      failure ??= error;
+  open(message: { proposalId: string; title: string; summary: string; authorId: string }): void {
+    this.proposalId = message.proposalId;
+    this.enqueue(async () => {
+      await this.ready;
+      await this.client.query(`INSERT INTO proposals (id, title, summary, author_id) VALUES ($1, $2, $3, $4)`, [this.proposalId, message.title.slice(0, 300), message.summary, message.authorId]);
     });
   }
 
-  async function finish(title: string, audit: { text: string; values: unknown[] }): Promise<void> {
+  write(part: PartText): void {
+    if (this.failure) return;
+    // The COPY text is built as soon as the part arrives, while the database takes the part before it.
+    const text = new CopyTextBuilder();
+    // Ids, positions and kinds are the API's own (uuids, integers, vocabulary words): nothing to escape.
+    for (let i = 0; i < part.ids.length; i++) {
+      text.word(part.ids[i]).word(this.proposalId).word(part.positions[i]).word(part.kinds[i]).jsonText(part.payloads[i])
+        .word(part.sourceIds[i]).word(part.speciesIds[i]).word(part.speciesPhaseIds[i]).endRow();
+    }
+    const rows = text.rows;
+    const pieces = text.finish();
+    const range = { column: 'position', from: part.positions[0], to: part.positions[part.positions.length - 1] };
+    // Each part after the one before it: its COPY, then the check of its references.
+    this.enqueue(async () => {
+      if (this.failure) return;
+      await copyPieces(this.client, 'proposal_items', ITEM_COLUMNS, pieces);
+      if (this.checks) this.checked += await checkForeignKeys(this.client, this.checks, ITEM_COLUMNS, { column: 'proposal_id', value: this.proposalId, range });
+      this.written += rows;
+      this.reply({ type: 'written', rows: this.written });
+    });
+  }
+
+  async finish(title: string, audit: { text: string; values: unknown[] }): Promise<void> {
+    const { client, proposalId } = this;
     try {
-      await queue;
-      if (failure) throw failure;
-      if (checks) {
+      await this.queue;
+      if (this.failure) throw this.failure;
+      if (this.checks) {
         await rowTriggers(client, 'on');
         const scope = { column: 'proposal_id', value: proposalId };
-        await checkDeferrableUniques(client, checks, scope);
+        await checkDeferrableUniques(client, this.checks, scope);
         // Every row lies in exactly one checked part: no position twice (just checked), and as many rows as were checked.
         const [{ rows }] = (await client.query(`SELECT count(*)::int AS rows FROM proposal_items WHERE proposal_id = $1`, [proposalId])).rows;
-        if (rows !== checked) throw new SetBasedCheckError(`${rows} items written but the references of ${checked} checked`);
+        if (rows !== this.checked) throw new SetBasedCheckError(`${rows} items written but the references of ${this.checked} checked`);
       }
       // The title may name what only the end of the file told (how many values).
       await client.query(`UPDATE proposals SET title = $2 WHERE id = $1 AND title <> $2`, [proposalId, title.slice(0, 300)]);
       await client.query(audit.text, audit.values);
-      await end('commit');
-      send({ type: 'finished', items: written });
+      await this.end('COMMIT');
+      this.reply({ type: 'finished', items: this.written });
     } catch (error) {
-      await end('rollback').catch(() => undefined);
-      send(failed(error));
-    } finally {
-      port.close();
+      await this.end('ROLLBACK').catch(() => undefined);
+      this.reply(failed(error));
     }
+  }
+
+  /** Rolls back whatever was written (nothing, when the proposal was not made yet). */
+  async abort(): Promise<void> {
+    await this.ready.then(() => this.queue).then(() => this.end('ROLLBACK')).catch(() => this.close());
+    this.reply({ type: 'aborted' });
+  }
+
+  private enqueue(step: () => Promise<void>): void {
+    this.queue = this.queue.then(step).catch((error: Error) => {
+      this.failure ??= error;
+    });
+  }
+
+  private async end(statement: 'COMMIT' | 'ROLLBACK'): Promise<void> {
+    await this.client.query(statement).finally(() => this.close());
+  }
+
+  private async close(): Promise<void> {
+    this.ended();
+    await this.client.end().catch(() => undefined);
   }
 }
 
 /** A failure as a message, with the PostgreSQL or socket error code that tells an outage from a refusal. */
-function failed(error: unknown): FromWriter {
+function failed(error: unknown): Reply {
   const e = error as { message?: string; code?: string };
   return { type: 'failed', message: e.message ?? String(error), ...(typeof e.code === 'string' ? { code: e.code } : {}) };
 }

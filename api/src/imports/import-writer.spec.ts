@@ -82,6 +82,37 @@ describe('bulk import writer (a thread of its own, one transaction)', () => {
     expect(await proposalRows(repeatingId)).toBe(0);
   });
 
+  it('keeps two imports at once apart: one rolls back while the other commits', async () => {
+    const kept = new ImportWriter(t.config.databaseUrl);
+    const dropped = new ImportWriter(t.config.databaseUrl);
+    const keptId = kept.begin(author, 'writer spec: kept', 'made by a spec');
+    const droppedId = dropped.begin(author, 'writer spec: dropped', 'made by a spec');
+    kept.write(part([1, 2]));
+    dropped.write(part([1, 2]));
+    dropped.write(part([3], randomUUID()));
+    kept.write(part([3]));
+    try {
+      const [keptItems] = await Promise.all([
+        kept.finish(author, 'writer spec: kept, three values', {}),
+        expectAsync(dropped.finish(author, 'never kept', {})).toBeRejectedWithError(/proposal_items_species_phase_id_fkey/),
+      ]);
+      expect(keptItems).toBe(3);
+      expect(await proposalRows(keptId)).toBe(1);
+      expect(await proposalRows(droppedId)).toBe(0);
+      // The writer thread outlives a failed import: the next one is written as before.
+      const next = new ImportWriter(t.config.databaseUrl);
+      const nextId = next.begin(author, 'writer spec: after a failure', 'made by a spec');
+      next.write(part([1]));
+      try {
+        expect(await next.finish(author, 'writer spec: after a failure, one value', {})).toBe(1);
+      } finally {
+        await t.dataSource.query(`DELETE FROM proposals WHERE id = $1`, [nextId]);
+      }
+    } finally {
+      await t.dataSource.query(`DELETE FROM proposals WHERE id = $1`, [keptId]);
+    }
+  });
+
   it('fails with the connection error code when the database cannot be reached', async () => {
     const unreachable = new URL(t.config.databaseUrl);
     unreachable.port = '9';

@@ -5,43 +5,78 @@ import type { Request } from 'express';
 import type { Principal } from '../auth/principal';
 import { auditInsert } from '../audit/audit.service';
 import type { PreparedImport } from './import-rows';
-import type { FromWriter, PartText, ToWriter, WriterStart } from './import-write-thread';
+import type { FromWriter, PartText, ToWriter } from './import-write-thread';
+
+type Answer = FromWriter extends infer M ? (M extends { session: string } ? Omit<M, 'session'> : never) : never;
+type Instruction = ToWriter extends infer M ? (M extends { session: string } ? Omit<M, 'session'> : never) : never;
 
 /**
- * The one transaction of a real import, written by a thread of its own (import-write-thread.ts):
- * a draft proposal, then its items COPYed part by part while the parts after them are still being
- * checked here (`write` hands a part over and returns at once), then one check of every reference
- * (or a trigger per row where the role may not switch row triggers off), the audit entry and
- * COMMIT. `abort` rolls everything back; so does any failure, and so does PostgreSQL when the
- * process dies (the connection goes with it).
+ * The one writer thread of this process (import-write-thread.ts), started with the first import
+ * and kept: each import is a session on it. It keeps the process alive only while a session is
+ * open. Should the thread fail, every open session hears why, and the next import starts another.
+ */
+class WriterThread {
+  private static current: WriterThread | null = null;
+  private readonly worker: Worker;
+  private readonly sessions = new Map<string, { hear: (answer: Answer) => void; stop: (error: Error) => void }>();
+
+  static shared(): WriterThread {
+    WriterThread.current ??= new WriterThread();
+    return WriterThread.current;
+  }
+
+  private constructor() {
+    this.worker = new Worker(path.join(__dirname, 'import-write-thread.js'), { workerData: { kxImportWriter: true } });
+    this.worker.unref();
+    this.worker.on('message', (message: FromWriter) => this.sessions.get(message.session)?.hear(message));
+    this.worker.on('error', (error) => this.gone(error));
+    this.worker.on('exit', () => this.gone(new Error('the import writer stopped before it finished')));
+  }
+
+  open(session: string, databaseUrl: string, hear: (answer: Answer) => void, stop: (error: Error) => void): void {
+    if (this.sessions.size === 0) this.worker.ref();
+    this.sessions.set(session, { hear, stop });
+    this.send(session, { type: 'connect', databaseUrl });
+  }
+
+  close(session: string): void {
+    if (this.sessions.delete(session) && this.sessions.size === 0) this.worker.unref();
+  }
+
+  send(session: string, instruction: Instruction): void {
+    this.worker.postMessage({ ...instruction, session } as ToWriter);
+  }
+
+  private gone(error: Error): void {
+    if (WriterThread.current === this) WriterThread.current = null;
+    const sessions = [...this.sessions.values()];
+    this.sessions.clear();
+    for (const session of sessions) session.stop(error);
+  }
+}
+
+/**
+ * The one transaction of a real import, written on the writer thread: a draft proposal, then its
+ * items COPYed part by part while the parts after them are still being checked here (`write`
+ * hands a part over and returns at once), then one check of every reference (or a trigger per row
+ * where the role may not switch row triggers off), the audit entry and COMMIT. `abort` rolls
+ * everything back; so does any failure, and so does PostgreSQL when the process dies (the
+ * connection goes with it).
  */
 export class ImportWriter {
-  private readonly worker: Worker;
+  private readonly thread = WriterThread.shared();
+  private readonly session = randomUUID();
   private proposal: string | null = null;
   private sent = 0;
   private written = 0;
   private onProgress: ((rowsWritten: number) => void) | null = null;
   /** the answer `ask` waits for */
-  private asked: { expected: FromWriter['type']; resolve: (message: FromWriter) => void; reject: (error: Error) => void } | null = null;
+  private asked: { expected: Answer['type']; resolve: (answer: Answer) => void; reject: (error: Error) => void } | null = null;
   private ended: Error | null = null;
 
-  /** Starts the writer's thread, which connects and begins the transaction meanwhile; `begin` then makes the proposal. */
+  /** Opens the import's session, whose connection and transaction begin meanwhile; `begin` then makes the proposal. */
   constructor(databaseUrl: string) {
-    const start: WriterStart = { databaseUrl };
-    this.worker = new Worker(path.join(__dirname, 'import-write-thread.js'), { workerData: { kxImportWriter: start } });
-    this.worker.on('message', (message: FromWriter) => {
-      if (message.type === 'written') {
-        this.written = message.rows;
-        this.onProgress?.(message.rows);
-        return;
-      }
-      const asked = this.asked;
-      this.asked = null;
-      if (message.type === 'failed') asked?.reject(Object.assign(new Error(message.message), message.code ? { code: message.code } : {}));
-      else if (message.type === asked?.expected) asked.resolve(message);
-    });
-    this.worker.on('error', (error) => this.stop(error));
-    this.worker.on('exit', () => this.stop(new Error('the import writer stopped before it finished')));
+    this.thread.open(this.session, databaseUrl, (answer) => this.hear(answer), (error) => this.stop(error));
   }
 
   get proposalId(): string {
@@ -55,7 +90,7 @@ export class ImportWriter {
    */
   begin(author: Principal, title: string, summary: string): string {
     this.proposal = randomUUID();
-    this.worker.postMessage({ type: 'open', proposalId: this.proposal, title, summary, authorId: author.userId } satisfies ToWriter);
+    this.thread.send(this.session, { type: 'open', proposalId: this.proposal, title, summary, authorId: author.userId });
     return this.proposal;
   }
 
@@ -80,13 +115,13 @@ export class ImportWriter {
       text.speciesPhaseIds.push(part.columns[i].speciesPhaseId);
     }
     this.sent += part.items.length;
-    this.worker.postMessage({ type: 'part', part: text } satisfies ToWriter);
+    this.thread.send(this.session, { type: 'part', part: text });
   }
 
   /** Waits for every part, checks the references, gives the proposal its final title, records the audit entry and commits; answers the items written. */
   async finish(author: Principal, title: string, details: Record<string, unknown>, req?: Request): Promise<number> {
     const audit = auditInsert({ action: 'proposal.create', actor: author, entityType: 'proposal', entityId: this.proposalId, details: { ...details, items: this.sent } }, req);
-    const answer = (await this.ask({ type: 'finish', title, audit }, 'finished')) as Extract<FromWriter, { type: 'finished' }>;
+    const answer = (await this.ask({ type: 'finish', title, audit }, 'finished')) as Extract<Answer, { type: 'finished' }>;
     return answer.items;
   }
 
@@ -95,11 +130,26 @@ export class ImportWriter {
     await this.ask({ type: 'abort' }, 'aborted').catch(() => undefined);
   }
 
-  private ask(message: ToWriter, expected: 'finished' | 'aborted'): Promise<FromWriter> {
+  private hear(answer: Answer): void {
+    if (answer.type === 'written') {
+      this.written = answer.rows;
+      this.onProgress?.(answer.rows);
+      return;
+    }
+    const asked = this.asked;
+    this.asked = null;
+    // finished, aborted or failed: the session is over.
+    this.thread.close(this.session);
+    this.ended ??= new Error('the import writer has finished');
+    if (answer.type === 'failed') asked?.reject(Object.assign(new Error(answer.message), answer.code ? { code: answer.code } : {}));
+    else if (answer.type === asked?.expected) asked.resolve(answer);
+  }
+
+  private ask(instruction: Instruction, expected: 'finished' | 'aborted'): Promise<Answer> {
     if (this.ended) return Promise.reject(this.ended);
     return new Promise((resolve, reject) => {
       this.asked = { expected, resolve, reject };
-      this.worker.postMessage(message);
+      this.thread.send(this.session, instruction);
     });
   }
 

@@ -79,6 +79,7 @@ export class CatalogueView {
   readonly valueById = new Map<string, CatalogueValue>();
   readonly fitById = new Map<string, CatalogueFit>();
   private readonly byName = new Map<string, CatalogueSpecies[]>();
+  private readonly byHillAndCharge = new Map<string, CatalogueSpecies[]>();
   private readonly phasesBySpecies = new Map<string, CataloguePhase[]>();
 
   static async load(manager: EntityManager, refs: { valueIds?: string[]; fitIds?: string[] } = {}): Promise<CatalogueView> {
@@ -164,7 +165,11 @@ export class CatalogueView {
   }
 
   addSpecies(s: CatalogueSpecies): void {
+    if (this.speciesById.has(s.id)) return;
     this.speciesById.set(s.id, s);
+    const sameFormula = this.byHillAndCharge.get(hillKey(s.hillFormula, s.charge));
+    if (sameFormula) sameFormula.push(s);
+    else this.byHillAndCharge.set(hillKey(s.hillFormula, s.charge), [s]);
     for (const key of speciesKeys(s.name, s.formula, s.synonyms)) {
       const list = this.byName.get(key) ?? [];
       if (!list.includes(s)) list.push(s);
@@ -184,6 +189,11 @@ export class CatalogueView {
     return this.byName.get(nameKey(text)) ?? [];
   }
 
+  /** Species of this Hill formula (as `hillFormula` writes it) and charge. */
+  speciesOfFormula(hill: string, charge: number): readonly CatalogueSpecies[] {
+    return this.byHillAndCharge.get(hillKey(hill, charge)) ?? [];
+  }
+
   phaseOf(speciesId: string, phase: PhaseCode, polymorph: string | null): CataloguePhase | undefined {
     return (this.phasesBySpecies.get(speciesId) ?? []).find((p) => p.phase === phase && (p.polymorph ?? null) === (polymorph ?? null));
   }
@@ -194,6 +204,7 @@ export class CatalogueView {
 }
 
 const nameKey = (text: string) => text.trim().toLowerCase();
+const hillKey = (hill: string, charge: number) => `${hill}|${charge}`;
 
 /**
  * Texts to compare with PostgreSQL's `lower(…)` of names: each as JavaScript lowers it (as
