@@ -69,13 +69,27 @@ export interface ImportReferences {
   formulas: FormulaReader;
 }
 
+/**
+ * A value row as drafted, with what makes two rows the same value: the same quantity of one
+ * species phase from one source at the same temperature (Cp at several temperatures is not a repeat).
+ */
+export interface DraftValue {
+  item: ItemInput;
+  line: number;
+  phaseKey: string;
+  quantity: Quantity;
+  transition: string | null;
+  sourceId: string | undefined;
+  temperature: number;
+}
+
 /** The rows as items, before their subjects are resolved against the catalogue. */
 export interface DraftImport {
   /** in position order: items[i] has position items[0].position + i */
   items: ItemInput[];
   /** lines[i]: the line items[i] comes from */
   lines: number[];
-  values: { item: ItemInput; line: number; duplicateKey: string; what: string }[];
+  values: DraftValue[];
   problems: ImportProblem[];
   counts: { species: number; phases: number; values: number };
 }
@@ -97,8 +111,8 @@ export interface ImportState {
   newPhases: Map<string, { item: ItemInput; line: number }>;
   nextPosition: number;
   resolution: ResolutionState;
-  /** duplicate key → the line that first gave it */
-  seen: Map<string, number>;
+  /** the values seen so far, by species phase (`DraftValue.phaseKey`) and temperature */
+  seen: Map<string, Map<number, DraftValue | DraftValue[]>>;
 }
 
 export function newImportState(): ImportState {
@@ -206,8 +220,8 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
   const phasesBefore = newPhases.size;
   const valueItems: DraftImport['values'] = [];
   const { formulas } = references;
-  // Within one part: the species phase each (formula, name, phase, polymorph) was found to be, and texts read once.
-  const phaseOfSubject = new Map<string, string>();
+  // Within one part: the catalogue phase each (formula, name, phase, polymorph) was found to be, by formula; and texts read once.
+  const phasesFound = new Map<string, { name: string | undefined; phase: string; polymorph: string | null; id: string }[]>();
   const pressures = remembered(readPressure);
   const temperatures = remembered(readTemperature);
 
@@ -245,9 +259,9 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
 
     const phase = f.phase as PhaseCode;
     const polymorph = f.polymorph ?? null;
-    // Files give many values of one species phase on consecutive rows: a phase found once is found again at once.
-    const subjectKey = `${f.formula}\u0000${f.name ?? ''}\u0000${phase}\u0000${polymorph ?? ''}`;
-    const knownPhase = phaseOfSubject.get(subjectKey);
+    // Files give many values of one species phase: a phase found once is found again at once.
+    const sameFormula = phasesFound.get(f.formula!);
+    const knownPhase = sameFormula?.find((k) => k.name === f.name && k.phase === phase && k.polymorph === polymorph)?.id;
     const found = knownPhase ? { subject: { speciesPhaseId: knownPhase }, phaseKey: knownPhase }
       : subjectOfRow(row, parsed.formula, phase, polymorph, formulas, catalogue, state);
     if ('problem' in found) {
@@ -255,10 +269,11 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
       continue;
     }
     const { subject, phaseKey } = found;
-    if (!knownPhase && 'speciesPhaseId' in subject) phaseOfSubject.set(subjectKey, phaseKey);
-
-    // The same quantity of one species phase from one source twice, at the same temperature, is a repeat (Cp at several T is not).
-    const duplicateKey = `${phaseKey}|${quantity}|${f.transition ?? ''}|${sourceId}|${temperature}`;
+    if (!knownPhase && 'speciesPhaseId' in subject) {
+      const entry = { name: f.name, phase, polymorph, id: phaseKey };
+      if (sameFormula) sameFormula.push(entry);
+      else phasesFound.set(f.formula!, [entry]);
+    }
 
     const computed = f.method === 'computed';
     // A subject is made afresh for each row, so it can become the payload.
@@ -277,7 +292,10 @@ export function draftImport(rows: ImportRow[], references: ImportReferences, cat
     if (f.sourceLocator) payload.sourceLocator = f.sourceLocator;
     const note = [f.notes, !computed && f.methodDetail ? `Method: ${f.methodDetail}` : undefined].filter(Boolean).join(' — ');
     if (note) payload.notes = note;
-    valueItems.push({ item: { id: timeOrderedId(), position: 0, kind: 'add_value', payload, sourceId: sourceId ?? null }, line: row.line, duplicateKey, what: `${quantity}${f.transition ? ` (${f.transition})` : ''}` });
+    valueItems.push({
+      item: { id: timeOrderedId(), position: 0, kind: 'add_value', payload, sourceId: sourceId ?? null }, line: row.line,
+      phaseKey, quantity, transition: f.transition ?? null, sourceId, temperature: temperature!,
+    });
   }
 
   const ordered = [...[...newSpecies.values()].slice(speciesBefore), ...[...newPhases.values()].slice(phasesBefore), ...valueItems];
@@ -352,13 +370,32 @@ export function checkDraft(draft: DraftImport, catalogue: CatalogueView, state =
     }
   }
   // Repeats among the rows that are otherwise fine.
-  const { seen } = state;
   for (const v of draft.values) {
     if (withProblems[v.item.position - firstPosition]) continue;
-    const first = seen.get(v.duplicateKey);
-    if (first !== undefined) problems.push({ line: v.line, field: 'quantity', message: `line ${first} already gives ${v.what} of this species phase from the same source at the same temperature` });
-    else seen.set(v.duplicateKey, v.line);
+    const first = firstOf(state.seen, v);
+    if (first) {
+      problems.push({ line: v.line, field: 'quantity', message: `line ${first.line} already gives ${v.quantity}${v.transition ? ` (${v.transition})` : ''} of this species phase from the same source at the same temperature` });
+    }
   }
   problems.sort((a, b) => a.line - b.line);
   return { items: draft.items, columns, problems, counts: draft.counts };
+}
+
+/** The value `seen` already holds that `v` repeats; otherwise `v` is added and undefined answered. */
+function firstOf(seen: ImportState['seen'], v: DraftValue): DraftValue | undefined {
+  let atPhase = seen.get(v.phaseKey);
+  if (!atPhase) seen.set(v.phaseKey, (atPhase = new Map()));
+  // Mostly one value per species phase and temperature: kept as it is, a list only when there are more.
+  const atTemperature = atPhase.get(v.temperature);
+  if (atTemperature === undefined) {
+    atPhase.set(v.temperature, v);
+    return undefined;
+  }
+  const same = (w: DraftValue) => w.quantity === v.quantity && w.transition === v.transition && w.sourceId === v.sourceId;
+  const values = Array.isArray(atTemperature) ? atTemperature : [atTemperature];
+  const first = values.find(same);
+  if (first) return first;
+  values.push(v);
+  atPhase.set(v.temperature, values);
+  return undefined;
 }

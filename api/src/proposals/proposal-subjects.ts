@@ -81,6 +81,9 @@ export class CatalogueView {
   private readonly byName = new Map<string, CatalogueSpecies[]>();
   private readonly byHillAndCharge = new Map<string, CatalogueSpecies[]>();
   private readonly phasesBySpecies = new Map<string, CataloguePhase[]>();
+  /** each catalogue species and phase as items see it, made once (thousands of items share them) */
+  private readonly subjectSpecies = new Map<CatalogueSpecies, SubjectSpecies>();
+  private readonly subjectPhases = new Map<CataloguePhase, SubjectPhase>();
 
   static async load(manager: EntityManager, refs: { valueIds?: string[]; fitIds?: string[] } = {}): Promise<CatalogueView> {
     const view = new CatalogueView();
@@ -200,6 +203,26 @@ export class CatalogueView {
 
   phasesOf(speciesId: string): CataloguePhase[] {
     return this.phasesBySpecies.get(speciesId) ?? [];
+  }
+
+  /** A catalogue species as an item's subject (shared, not to be changed). */
+  asSubject(s: CatalogueSpecies): SubjectSpecies {
+    let subject = this.subjectSpecies.get(s);
+    if (!subject) {
+      subject = { id: s.id, itemId: null, formula: s.formula, hillFormula: s.hillFormula, name: s.name, composition: s.composition, charge: s.charge };
+      this.subjectSpecies.set(s, subject);
+    }
+    return subject;
+  }
+
+  /** A catalogue phase as an item's subject (shared, not to be changed). */
+  asSubjectPhase(p: CataloguePhase): SubjectPhase {
+    let subject = this.subjectPhases.get(p);
+    if (!subject) {
+      subject = { id: p.id, itemId: null, phase: p.phase, polymorph: p.polymorph, isReferenceState: p.isReferenceState };
+      this.subjectPhases.set(p, subject);
+    }
+    return subject;
   }
 }
 
@@ -323,13 +346,13 @@ export function resolveItems(items: ItemInput[], catalogue: CatalogueView, state
     if (refs.speciesId) {
       const s = catalogue.speciesById.get(refs.speciesId);
       if (!s) problems.push({ field: 'payload.speciesId', message: `no species ${refs.speciesId} in the catalogue` });
-      return s ? fromCatalogue(s) : undefined;
+      return s ? catalogue.asSubject(s) : undefined;
     }
     if (!refs.speciesName) return undefined;
     const key = nameKey(refs.speciesName);
     const pending = newSpecies.filter((s) => nameKey(s.name) === key || nameKey(s.formula) === key);
     const existing = catalogue.speciesNamed(refs.speciesName);
-    const candidates = [...pending, ...existing.map(fromCatalogue)];
+    const candidates = [...pending, ...existing.map((e) => catalogue.asSubject(e))];
     if (candidates.length === 0) {
       problems.push({ field: 'payload.species', message: `no species named "${refs.speciesName}" in the catalogue or added earlier in this proposal` });
       return undefined;
@@ -347,7 +370,7 @@ export function resolveItems(items: ItemInput[], catalogue: CatalogueView, state
     if (pending) return pending;
     if (species.id) {
       const existing = catalogue.phaseOf(species.id, phase, polymorph);
-      if (existing) return { id: existing.id, itemId: null, phase: existing.phase, polymorph: existing.polymorph, isReferenceState: existing.isReferenceState };
+      if (existing) return catalogue.asSubjectPhase(existing);
     }
     const label = polymorph ? `${phase}, ${polymorph}` : phase;
     problems.push({ field: 'payload.phase', message: `${species.name} has no phase ${label} yet: add an add_phase item before this one` });
@@ -355,14 +378,13 @@ export function resolveItems(items: ItemInput[], catalogue: CatalogueView, state
   };
 
   for (const item of ordered) {
-    const problems: EntryProblem[] = [];
     // The target's quantity decides the units a revision may use, so the target is looked up first.
     const preliminary = checkItemPayload(item.kind, item.payload, item.sourceId);
     const targetValue = preliminary.refs.targetValueId ? catalogue.valueById.get(preliminary.refs.targetValueId) : undefined;
-    const { problems: payloadProblems, refs } = item.kind === 'revise_value' && targetValue
+    // The check's own list of problems, made for this item, gathers the rest too.
+    const { problems, refs } = item.kind === 'revise_value' && targetValue
       ? checkItemPayload(item.kind, item.payload, item.sourceId, { quantity: targetValue.quantity, transitionKind: targetValue.transitionKind })
       : preliminary;
-    problems.push(...payloadProblems);
     const result: ResolvedItem = { item, problems, refs };
     results.push(result);
 
@@ -416,8 +438,8 @@ export function resolveItems(items: ItemInput[], catalogue: CatalogueView, state
             problems.push({ field: 'payload.speciesPhaseId', message: `no species phase ${refs.speciesPhaseId} in the catalogue` });
             break;
           }
-          result.species = fromCatalogue(catalogue.speciesById.get(p.speciesId)!);
-          result.phase = { id: p.id, itemId: null, phase: p.phase, polymorph: p.polymorph, isReferenceState: p.isReferenceState };
+          result.species = catalogue.asSubject(catalogue.speciesById.get(p.speciesId)!);
+          result.phase = catalogue.asSubjectPhase(p);
         } else {
           const species = findSpecies(refs, problems);
           if (species && refs.phase) {
@@ -487,14 +509,11 @@ function resolveFit(result: ResolvedItem, fitId: string, catalogue: CatalogueVie
 function describeTarget(result: ResolvedItem, catalogue: CatalogueView, speciesPhaseId: string): void {
   const p = catalogue.phaseById.get(speciesPhaseId);
   if (!p) return;
-  result.phase = { id: p.id, itemId: null, phase: p.phase, polymorph: p.polymorph, isReferenceState: p.isReferenceState };
+  result.phase = catalogue.asSubjectPhase(p);
   const s = catalogue.speciesById.get(p.speciesId);
-  if (s) result.species = fromCatalogue(s);
+  if (s) result.species = catalogue.asSubject(s);
 }
 
-function fromCatalogue(s: CatalogueSpecies): SubjectSpecies {
-  return { id: s.id, itemId: null, formula: s.formula, hillFormula: s.hillFormula, name: s.name, composition: s.composition, charge: s.charge };
-}
 
 /** Value and fit ids the items refer to, to load before resolving. */
 export function referencedIds(items: ItemInput[]): { valueIds: string[]; fitIds: string[] } {

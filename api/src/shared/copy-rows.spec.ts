@@ -29,14 +29,12 @@ describe('COPY text', () => {
     await client.query('ROLLBACK');
   });
 
-  it('builds bytes that PostgreSQL reads back as the same values: ASCII only, with non-ASCII JSON as \\u escapes', async () => {
+  it('builds bytes from words, nulls and JSON text (as UTF-8) that PostgreSQL reads back as the same values', async () => {
     const text = new CopyTextBuilder();
     const ids = ['4b0f6c1e-3f1a-4e7e-9d7a-2f1b3c4d5e6f', '0c8d1f2a-5b6c-4d7e-8f90-a1b2c3d4e5f6'];
-    tricky.forEach((payload, i) => text.word(ids[i]).word(i + 1).word(i === 0 ? 'add_value' : null).json(payload).word(null).endRow());
-    const pieces = text.finish();
+    tricky.forEach((payload, i) => text.word(ids[i]).word(i + 1).word(i === 0 ? 'add_value' : null).jsonText(JSON.stringify(payload)).word(null).endRow());
     expect(text.rows).toBe(2);
-    expect(pieces.every((piece) => piece.every((byte) => byte < 0x80))).toBeTrue();
-    await copyPieces(client, 'kx_spec_copy', ['id', 'position', 'kind', 'payload', 'note'], pieces);
+    await copyPieces(client, 'kx_spec_copy', ['id', 'position', 'kind', 'payload', 'note'], text.finish());
     const { rows } = await client.query(`SELECT id, position, kind, payload, note FROM kx_spec_copy ORDER BY position`);
     expect(rows).toEqual([
       { id: ids[0], position: 1, kind: 'add_value', payload: tricky[0], note: null },
@@ -44,18 +42,10 @@ describe('COPY text', () => {
     ]);
   });
 
-  it('writes JSON text as UTF-8 that PostgreSQL reads back as the same values', async () => {
-    const text = new CopyTextBuilder();
-    tricky.forEach((payload, i) => text.word(i + 1).jsonText(JSON.stringify(payload)).endRow());
-    await copyPieces(client, 'kx_spec_copy', ['position', 'payload'], text.finish());
-    const { rows } = await client.query(`SELECT payload FROM kx_spec_copy ORDER BY position`);
-    expect(rows.map((r: { payload: unknown }) => r.payload)).toEqual(tricky);
-  });
-
   it('starts a new piece when one fills up; a row may run across two, as COPY allows', async () => {
     const text = new CopyTextBuilder();
     const long = 'x'.repeat(300_000);
-    for (let i = 1; i <= 8; i++) text.word(i).json({ long }).endRow();
+    for (let i = 1; i <= 8; i++) text.word(i).jsonText(JSON.stringify({ long })).endRow();
     const pieces = text.finish();
     expect(pieces.length).toBeGreaterThan(1);
     expect(pieces.some((piece) => piece[piece.length - 1] !== 10)).toBeTrue();

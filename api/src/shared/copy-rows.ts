@@ -33,24 +33,6 @@ function escapeText(text: string): string {
 }
 
 const NON_ASCII = /[^\x00-\x7f]/;
-const NON_ASCII_ALL = /[^\x00-\x7f]/g;
-
-/**
- * A jsonb field in COPY's text format, written in ASCII only (other characters as JSON's \uXXXX
- * escapes, which PostgreSQL reads back as the same characters): ASCII text becomes bytes without
- * UTF-8 encoding, the costliest step of writing a large COPY from JavaScript.
- */
-export function copyJsonField(value: unknown): string {
-  return copyJsonText(JSON.stringify(value));
-}
-
-/** `copyJsonField` of JSON text already made. */
-export function copyJsonText(text: string): string {
-  let json = text;
-  if (NON_ASCII.test(json)) json = json.replace(NON_ASCII_ALL, (c) => `\\u${c.charCodeAt(0).toString(16).padStart(4, '0')}`);
-  // JSON text holds no raw newline or tab; its backslashes are COPY's escape character.
-  return json.includes('\\') ? json.replace(/\\/g, '\\\\') : json;
-}
 
 /** One row of COPY text, ending in a newline. */
 export function copyLine(fields: readonly unknown[]): string {
@@ -126,11 +108,6 @@ export class CopyTextBuilder {
   /** A field that needs no escaping: an integer, or text of ASCII letters, digits and dashes (a uuid, a vocabulary word); null is \N. */
   word(value: string | number | null): this {
     return this.put(value === null ? '\\N' : typeof value === 'number' ? String(value) : value);
-  }
-
-  /** A jsonb field (`copyJsonField`). */
-  json(value: unknown): this {
-    return this.put(copyJsonField(value));
   }
 
   /** A jsonb field from JSON text, written as UTF-8. */
