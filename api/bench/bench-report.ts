@@ -72,6 +72,9 @@ export function printTable(results: BenchResults): void {
       console.log(`  PostgreSQL COPY (same SELECT) TO STDOUT CSV: ${ex.copy.rows.toLocaleString('en')} rows, ${(ex.copy.bytes / 1e6).toFixed(1)} MB in ${ex.copy.seconds} s = ` +
         `${ex.copy.rowsPerSecond.toLocaleString('en')} rows/s, ${ex.copy.megabytesPerSecond} MB/s; API/COPY = ${num(ex.ratio, 2)}`);
     }
+    if (ex.meanwhile) {
+      console.log(`  meanwhile, ${ex.meanwhile.requests} ${ex.meanwhile.what} one at a time (10 a second): p50 ${ex.meanwhile.p50} ms, p95 ${ex.meanwhile.p95} ms, max ${ex.meanwhile.max} ms, ${ex.meanwhile.errors} errors`);
+    }
   } else {
     console.log(`Full CSV export: not available (${ex.reason})`);
   }

@@ -1,7 +1,7 @@
 import { Client } from 'pg';
 import { to as copyTo } from 'pg-copy-streams';
 import { sampleRss, type ApiProcess } from './api-process';
-import { round } from './latency-stats';
+import { loadStats, round, type LoadStats } from './latency-stats';
 import { inlineParameters, type CapturedStatement } from './sql-load';
 
 /** A full-size export through the API against PostgreSQL's own COPY of the same rows. */
@@ -23,6 +23,8 @@ export interface ExportResult {
   copy: { seconds: number; bytes: number; rows: number; rowsPerSecond: number; megabytesPerSecond: number } | null;
   /** API rows/s over COPY rows/s */
   ratio: number | null;
+  /** other requests (one at a time) answered while the export streamed: does the export hold the API up? */
+  meanwhile: (LoadStats & { what: string }) | null;
 }
 
 /** Counts rows of a streamed CSV: lines that are neither `#` comments nor the header. */
@@ -47,22 +49,54 @@ class CsvCounter {
   }
 }
 
-export async function exportBench(api: ApiProcess, path: string, statement: CapturedStatement | null, databaseUrl: string): Promise<ExportResult> {
+/** Probe requests start this far apart (or when the one before is answered, if later): few enough not to slow the export measured. */
+const PROBE_INTERVAL_MS = 100;
+
+/** Requests sent one at a time, at most one per PROBE_INTERVAL_MS, from the same paths in turn, until `until` settles. */
+async function requestsDuring(api: ApiProcess, paths: string[], until: Promise<unknown>): Promise<{ latencies: number[]; errors: number; seconds: number }> {
+  let over = false;
+  void until.finally(() => (over = true)).catch(() => undefined);
+  const latencies: number[] = [];
+  let errors = 0;
+  const t0 = performance.now();
+  for (let i = 0; !over && paths.length > 0; i++) {
+    const start = performance.now();
+    const answer = await fetch(`${api.url}${paths[i % paths.length]}`);
+    await answer.arrayBuffer();
+    if (answer.ok) latencies.push(performance.now() - start);
+    else errors++;
+    const pause = start + PROBE_INTERVAL_MS - performance.now();
+    if (pause > 0) await Promise.race([new Promise((resolve) => setTimeout(resolve, pause)), until.catch(() => undefined)]);
+  }
+  return { latencies, errors, seconds: (performance.now() - t0) / 1000 };
+}
+
+/**
+ * The export through the API, with `probe.paths` asked one at a time while it streams; then
+ * PostgreSQL's COPY of the captured statement.
+ */
+export async function exportBench(api: ApiProcess, path: string, statement: CapturedStatement | null, databaseUrl: string, probe: { what: string; paths: string[] } | null = null): Promise<ExportResult> {
   const rssBefore = api.rssMb();
   const sampler = sampleRss(api.pid, 100);
   const counter = new CsvCounter();
   const t0 = performance.now();
-  const answer = await fetch(`${api.url}${path}`);
-  const firstByte = (performance.now() - t0) / 1000;
-  if (answer.body) {
-    const reader = answer.body.getReader();
-    for (;;) {
-      const { done, value } = await reader.read();
-      if (done) break;
-      counter.add(value);
+  let firstByte = 0;
+  const streamed = (async () => {
+    const answer = await fetch(`${api.url}${path}`);
+    firstByte = (performance.now() - t0) / 1000;
+    if (answer.body) {
+      const reader = answer.body.getReader();
+      for (;;) {
+        const { done, value } = await reader.read();
+        if (done) break;
+        counter.add(value);
+      }
     }
-  }
+    return answer;
+  })();
+  const [answer, probed] = await Promise.all([streamed, probe ? requestsDuring(api, probe.paths, streamed) : null]);
   const seconds = (performance.now() - t0) / 1000;
+  const meanwhile = probe && probed ? { what: probe.what, ...loadStats(probed.latencies, 1, probed.seconds, probed.errors) } : null;
   const samples = sampler.stop();
   const trend = Array.from({ length: 10 }, (_, k) => round(samples[Math.min(samples.length - 1, Math.floor(((k + 1) * samples.length) / 10) - 1)] ?? Number.NaN, 1));
   const apiResult = {
@@ -78,7 +112,7 @@ export async function exportBench(api: ApiProcess, path: string, statement: Capt
     rssAfterMb: round(api.rssMb(), 1),
     rssTrendMb: trend,
   };
-  if (!statement) return { api: apiResult, copy: null, ratio: null };
+  if (!statement) return { api: apiResult, copy: null, ratio: null, meanwhile };
 
   const client = new Client({ connectionString: databaseUrl });
   await client.connect();
@@ -96,7 +130,7 @@ export async function exportBench(api: ApiProcess, path: string, statement: Capt
       rowsPerSecond: Math.round(copyCounter.rows / copySeconds),
       megabytesPerSecond: round(copyCounter.bytes / 1e6 / copySeconds, 1),
     };
-    return { api: apiResult, copy, ratio: round(apiResult.rowsPerSecond / copy.rowsPerSecond, 2) };
+    return { api: apiResult, copy, ratio: round(apiResult.rowsPerSecond / copy.rowsPerSecond, 2), meanwhile };
   } finally {
     await client.end();
   }

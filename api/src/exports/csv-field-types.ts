@@ -6,6 +6,8 @@ const INT2 = 21;
 const INT4 = 23;
 const FLOAT4 = 700;
 const FLOAT8 = 701;
+const JSON_TYPE = 114;
+const JSONB = 3802;
 
 /**
  * A float as PostgreSQL prints it → as JavaScript prints the same number (`String(Number(text))`),
@@ -22,12 +24,15 @@ export function floatText(text: string): string {
 
 const integerText = (text: string) => text;
 const booleanText = (text: string) => (text === 't' ? 'true' : 'false');
+/** JSON stays PostgreSQL's text; the CSV encoder (csv-encode-thread.ts) writes it as JSON.stringify would. */
+const jsonText = (text: string) => text;
 
 /**
  * Type parsers for reading rows that are only written out as text (the CSV export): numbers and
  * booleans stay text, spelt as `String()` of the value pg would have parsed (`-74873`, `1e-7`,
  * `true`), so the CSV holds the same bytes as when every field was parsed first, at a fraction of
- * the cost (a CSV export converts millions of numbers). Every other type is parsed as usual.
+ * the cost (a CSV export converts millions of numbers). JSON stays text too. Every other type is
+ * parsed as usual.
  */
 export const CSV_FIELD_TYPES: CustomTypesConfig = {
   getTypeParser: (oid: number, format?: 'text' | 'binary') => {
@@ -40,6 +45,9 @@ export const CSV_FIELD_TYPES: CustomTypesConfig = {
         return integerText;
       case BOOL:
         return booleanText;
+      case JSON_TYPE:
+      case JSONB:
+        return jsonText;
       default:
         return types.getTypeParser(oid, format);
     }

@@ -1,7 +1,11 @@
+import { randomUUID } from 'node:crypto';
+import path from 'node:path';
 import { Transform } from 'node:stream';
 import { stringify, type Options as StringifyOptions } from 'csv-stringify/sync';
 import { XMLBuilder } from 'fast-xml-parser';
+import { SessionThread } from '../shared/session-thread';
 import type { SourceRef } from '../species/species.service';
+import { CSV_ENCODER_ROLE, CSV_OPTIONS, type CsvRun, type FromEncoder } from './csv-encode-thread';
 import { EXPORT_COLUMNS, type ExportRow, type Nasa7Row } from './export.service';
 import { nasa7Lines, nasa7Record } from './nasa7-format';
 
@@ -53,16 +57,18 @@ function textTransform<T>(map: (row: T) => string | null, prefix: string, suffix
 }
 
 /**
- * Rows per call of csv-stringify's synchronous API. Encoding a million export rows took 18 s of CPU
- * through its stream (a write, a push and a Buffer per row) and 10 s in calls of 100 rows; calls
- * of 1 000 rows are slower again (their strings outlive V8's young generation).
+ * Rows per run sent to the encoder thread: one message and one csv-stringify call each (calls of
+ * 1 000 rows were slower than of 100: their strings outlive V8's young generation).
  */
-const CSV_ROWS_PER_CALL = 100;
+const CSV_ROWS_PER_RUN = 100;
+/** Runs on their way to the encoder thread and back, at most: reading goes on meanwhile, memory stays bounded. */
+const CSV_RUNS_IN_FLIGHT = 8;
 
 /**
  * CSV: `#` comment lines (release, filters, sources), then a header row and one row per value or
- * fit. Takes rows as arrays in EXPORT_COLUMNS order (ExportService.csvRows) and writes them with
- * csv-stringify, a run of rows per call.
+ * fit. Takes rows as arrays in EXPORT_COLUMNS order (ExportService.csvRows: every field text or
+ * null) and has csv-stringify write them on the encoder thread (csv-encode-thread.ts), a run of
+ * rows at a time, in order.
  */
 export function csvStages(header: ExportHeader): Transform[] {
   const comments = [
@@ -72,35 +78,62 @@ export function csvStages(header: ExportHeader): Transform[] {
     'sources:',
     ...header.sources.map((s) => `  [${s.key}] ${s.citation}`),
   ].map((line) => `# ${line.replace(/[\r\n]+/g, ' ')}\n`).join('');
-  const options: StringifyOptions = {
-    columns: EXPORT_COLUMNS as string[],
-    cast: {
-      boolean: (b) => (b ? 'true' : 'false'),
-      object: (o) => JSON.stringify(o),
-      date: (d) => d.toISOString(),
+  const session = randomUUID();
+  const encoder = SessionThread.of<CsvRun, FromEncoder>(path.join(__dirname, 'csv-encode-thread.js'), CSV_ENCODER_ROLE);
+  /** each row of the run being gathered, its fields joined by NUL */
+  let run: string[] = [];
+  let inFlight = 0;
+  /** the callback held back while CSV_RUNS_IN_FLIGHT runs are out, or until the last run is back */
+  let held: ((error?: Error | null) => void) | null = null;
+  let ending = false;
+
+  const send = () => {
+    encoder.send(session, { fields: run.join('\u0000'), rows: run.length });
+    inFlight++;
+    run = [];
+  };
+  /** Lets the rows go on once fewer runs are out (or, at the end, once every run is back). */
+  const release = () => {
+    const callback = held;
+    if (!callback || (ending ? inFlight > 0 : inFlight >= CSV_RUNS_IN_FLIGHT)) return;
+    held = null;
+    if (ending) encoder.close(session);
+    callback();
+  };
+
+  const stage = new Transform({
+    writableObjectMode: true,
+    construct(callback) {
+      const fail = (error: Error) => stage.destroy(error);
+      encoder.open(session, (answer) => {
+        inFlight--;
+        if ('error' in answer) return fail(new Error(`the CSV could not be written: ${answer.error}`));
+        stage.push(Buffer.from(answer.bytes.buffer, answer.bytes.byteOffset, answer.bytes.byteLength));
+        release();
+      }, fail);
+      this.push(comments + stringify([], { ...CSV_OPTIONS, header: true }));
+      callback();
     },
-  };
-  let rows: unknown[][] = [];
-  let started = false;
-  const csv = (): string => {
-    const text = stringify(rows, { ...options, header: !started });
-    rows = [];
-    if (started) return text;
-    started = true;
-    return comments + text;
-  };
-  return [
-    new Transform({
-      writableObjectMode: true,
-      transform(row: unknown[], _encoding, callback) {
-        rows.push(row);
-        callback(null, rows.length >= CSV_ROWS_PER_CALL ? csv() : undefined);
-      },
-      flush(callback) {
-        callback(null, rows.length > 0 || !started ? csv() : undefined);
-      },
-    }),
-  ];
+    transform(row: (string | null)[], _encoding, callback) {
+      // join() writes null as empty text, as csv-stringify writes a null field.
+      run.push(row.join('\u0000'));
+      if (run.length < CSV_ROWS_PER_RUN) return callback();
+      send();
+      held = callback;
+      release();
+    },
+    flush(callback) {
+      if (run.length > 0) send();
+      ending = true;
+      held = callback;
+      release();
+    },
+    destroy(error, callback) {
+      encoder.close(session);
+      callback(error);
+    },
+  });
+  return [stage];
 }
 
 /** Groups consecutive rows of one species into one record. */

@@ -1,11 +1,11 @@
-import { parentPort, workerData } from 'node:worker_threads';
+import { parentPort } from 'node:worker_threads';
 import { Client } from 'pg';
 import { CopyTextBuilder, copyPieces } from '../shared/copy-rows';
+import { isSessionThread } from '../shared/session-thread';
 import { checkDeferrableUniques, checkForeignKeys, rowTriggers, SetBasedCheckError, setBasedChecksPossible, type TableChecks } from '../shared/set-based-checks';
 
 /**
- * The bulk imports' writer, on a thread of its own that lives as long as the API (starting a
- * thread and compiling this code again for every import cost more than a tenth of a second). Each
+ * The bulk imports' writer, on a thread of its own shared by the imports (SessionThread). Each
  * import is a session here: one connection, one transaction. The request's thread checks the rows
  * and sends each checked part (its payloads as JSON text); this thread builds the part's COPY text
  * and keeps the connection busy, so the database writes while the API checks (on one thread the
@@ -43,7 +43,9 @@ export type FromWriter = { session: string } & (
 
 type Reply = FromWriter extends infer M ? (M extends { session: string } ? Omit<M, 'session'> : never) : never;
 
-if (parentPort && workerData?.kxImportWriter) serve();
+export const WRITER_ROLE = 'import-writer';
+
+if (isSessionThread(WRITER_ROLE)) serve();
 
 function serve(): void {
   const port = parentPort!;

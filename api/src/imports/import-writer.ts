@@ -1,59 +1,14 @@
 import { randomUUID } from 'node:crypto';
 import path from 'node:path';
-import { Worker } from 'node:worker_threads';
 import type { Request } from 'express';
 import type { Principal } from '../auth/principal';
 import { auditInsert } from '../audit/audit.service';
+import { SessionThread } from '../shared/session-thread';
 import type { PreparedImport } from './import-rows';
-import type { FromWriter, PartText, ToWriter } from './import-write-thread';
+import { WRITER_ROLE, type FromWriter, type PartText, type ToWriter } from './import-write-thread';
 
 type Answer = FromWriter extends infer M ? (M extends { session: string } ? Omit<M, 'session'> : never) : never;
 type Instruction = ToWriter extends infer M ? (M extends { session: string } ? Omit<M, 'session'> : never) : never;
-
-/**
- * The one writer thread of this process (import-write-thread.ts), started with the first import
- * and kept: each import is a session on it. It keeps the process alive only while a session is
- * open. Should the thread fail, every open session hears why, and the next import starts another.
- */
-class WriterThread {
-  private static current: WriterThread | null = null;
-  private readonly worker: Worker;
-  private readonly sessions = new Map<string, { hear: (answer: Answer) => void; stop: (error: Error) => void }>();
-
-  static shared(): WriterThread {
-    WriterThread.current ??= new WriterThread();
-    return WriterThread.current;
-  }
-
-  private constructor() {
-    this.worker = new Worker(path.join(__dirname, 'import-write-thread.js'), { workerData: { kxImportWriter: true } });
-    this.worker.unref();
-    this.worker.on('message', (message: FromWriter) => this.sessions.get(message.session)?.hear(message));
-    this.worker.on('error', (error) => this.gone(error));
-    this.worker.on('exit', () => this.gone(new Error('the import writer stopped before it finished')));
-  }
-
-  open(session: string, databaseUrl: string, hear: (answer: Answer) => void, stop: (error: Error) => void): void {
-    if (this.sessions.size === 0) this.worker.ref();
-    this.sessions.set(session, { hear, stop });
-    this.send(session, { type: 'connect', databaseUrl });
-  }
-
-  close(session: string): void {
-    if (this.sessions.delete(session) && this.sessions.size === 0) this.worker.unref();
-  }
-
-  send(session: string, instruction: Instruction): void {
-    this.worker.postMessage({ ...instruction, session } as ToWriter);
-  }
-
-  private gone(error: Error): void {
-    if (WriterThread.current === this) WriterThread.current = null;
-    const sessions = [...this.sessions.values()];
-    this.sessions.clear();
-    for (const session of sessions) session.stop(error);
-  }
-}
 
 /**
  * The one transaction of a real import, written on the writer thread: a draft proposal, then its
@@ -64,7 +19,7 @@ class WriterThread {
  * connection goes with it).
  */
 export class ImportWriter {
-  private readonly thread = WriterThread.shared();
+  private readonly thread = SessionThread.of<Instruction, FromWriter>(path.join(__dirname, 'import-write-thread.js'), WRITER_ROLE);
   private readonly session = randomUUID();
   private proposal: string | null = null;
   private sent = 0;
@@ -76,7 +31,8 @@ export class ImportWriter {
 
   /** Opens the import's session, whose connection and transaction begin meanwhile; `begin` then makes the proposal. */
   constructor(databaseUrl: string) {
-    this.thread.open(this.session, databaseUrl, (answer) => this.hear(answer), (error) => this.stop(error));
+    this.thread.open(this.session, (answer) => this.hear(answer), (error) => this.stop(error));
+    this.thread.send(this.session, { type: 'connect', databaseUrl });
   }
 
   get proposalId(): string {

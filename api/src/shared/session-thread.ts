@@ -1,0 +1,57 @@
+import { isMainThread, Worker, workerData } from 'node:worker_threads';
+
+/**
+ * A worker thread that many sessions share (the imports being written, the exports being
+ * encoded): started with the first session and kept, because starting a thread and compiling its
+ * code again for every request cost more than a tenth of a second. Messages carry the session
+ * they belong to. The thread keeps the process alive only while a session is open. Should it
+ * fail, every open session hears why, and the next session starts another thread.
+ */
+export class SessionThread<ToThread extends object, FromThread extends { session: string }> {
+  private static readonly running = new Map<string, SessionThread<object, { session: string }>>();
+  private readonly worker: Worker;
+  private readonly sessions = new Map<string, { hear: (message: FromThread) => void; stop: (error: Error) => void }>();
+
+  /** The thread running `file` (a compiled module that serves when `isSessionThread(role)`), started if it is not running. */
+  static of<T extends object, F extends { session: string }>(file: string, role: string): SessionThread<T, F> {
+    let thread = SessionThread.running.get(file);
+    if (!thread) {
+      thread = new SessionThread(file, role);
+      SessionThread.running.set(file, thread);
+    }
+    return thread as unknown as SessionThread<T, F>;
+  }
+
+  private constructor(private readonly file: string, role: string) {
+    this.worker = new Worker(file, { workerData: { kxSessionThread: role } });
+    this.worker.unref();
+    this.worker.on('message', (message: FromThread) => this.sessions.get(message.session)?.hear(message));
+    this.worker.on('error', (error) => this.gone(error));
+    this.worker.on('exit', () => this.gone(new Error('the worker thread stopped')));
+  }
+
+  open(session: string, hear: (message: FromThread) => void, stop: (error: Error) => void): void {
+    if (this.sessions.size === 0) this.worker.ref();
+    this.sessions.set(session, { hear, stop });
+  }
+
+  close(session: string): void {
+    if (this.sessions.delete(session) && this.sessions.size === 0) this.worker.unref();
+  }
+
+  send(session: string, message: ToThread, transfer: ArrayBuffer[] = []): void {
+    this.worker.postMessage({ ...message, session }, transfer);
+  }
+
+  private gone(error: Error): void {
+    if ((SessionThread.running.get(this.file) as unknown) === this) SessionThread.running.delete(this.file);
+    const sessions = [...this.sessions.values()];
+    this.sessions.clear();
+    for (const session of sessions) session.stop(error);
+  }
+}
+
+/** True in the thread that `SessionThread.of(file, role)` started for `role`: the module is to serve. */
+export function isSessionThread(role: string): boolean {
+  return !isMainThread && workerData?.kxSessionThread === role;
+}
