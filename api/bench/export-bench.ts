@@ -2,7 +2,7 @@ import { Client } from 'pg';
 import { to as copyTo } from 'pg-copy-streams';
 import { sampleRss, type ApiProcess } from './api-process';
 import { loadStats, round, type LoadStats } from './latency-stats';
-import { inlineParameters, type CapturedStatement } from './sql-load';
+import { inlineStatement, type CapturedStatement } from './sql-load';
 
 /** A full-size export through the API against PostgreSQL's own COPY of the same rows. */
 export interface ExportResult {
@@ -47,6 +47,17 @@ class CsvCounter {
   get rows(): number {
     return Math.max(0, this.lines - this.comments - 1);
   }
+}
+
+/**
+ * The statement that reads an export's rows, from those captured while it ran: a streamed
+ * query, or the query inside a COPY … TO STDOUT (the CSV export's way out of the database).
+ */
+export function exportedQuery(statements: CapturedStatement[]): CapturedStatement | null {
+  const streamed = statements.find((s) => s.stream);
+  if (streamed) return streamed;
+  const copy = statements.map((s) => /^COPY \(([\s\S]*)\) TO STDOUT$/.exec(s.text)).find(Boolean);
+  return copy ? { text: copy[1], values: [], stream: true } : null;
 }
 
 /** Probe requests start this far apart (or when the one before is answered, if later): few enough not to slow the export measured. */
@@ -117,7 +128,7 @@ export async function exportBench(api: ApiProcess, path: string, statement: Capt
   const client = new Client({ connectionString: databaseUrl });
   await client.connect();
   try {
-    const sql = `COPY (${inlineParameters(statement, (t) => client.escapeLiteral(t))}) TO STDOUT WITH (FORMAT csv, HEADER)`;
+    const sql = `COPY (${inlineStatement(statement, (t) => client.escapeLiteral(t))}) TO STDOUT WITH (FORMAT csv, HEADER)`;
     const copyCounter = new CsvCounter();
     const c0 = performance.now();
     const stream = client.query(copyTo(sql));

@@ -24,7 +24,7 @@ import { startApi, sampleRss, type ApiProcess } from './api-process';
 import { startBenchCluster } from './bench-cluster';
 import { checkTargets, printTable, writeResults, type BenchResults, type ScenarioRow } from './bench-report';
 import { buildScenarios, latestPublishedRelease, type Scenario } from './bench-scenarios';
-import { exportBench } from './export-bench';
+import { exportBench, exportedQuery } from './export-bench';
 import { benchDataOptions, ensureBenchData } from './generate-data';
 import { httpLoad, type HttpRequestSpec } from './http-load';
 import { importBenchRuns } from './import-bench';
@@ -193,7 +193,7 @@ async function main(): Promise<void> {
         fullExport = { available: false, reason: `GET ${exportPath} answered ${exportCapture.status}` };
       } else {
         console.log('  full CSV export through the API, then COPY TO STDOUT of the same query…');
-        const rowsQuery = exportCapture.statements.find((s) => s.stream) ?? null;
+        const rowsQuery = exportedQuery(exportCapture.statements);
         // Formula searches one at a time meanwhile: an export must not hold the other requests up.
         const searches = scenarios.find((s) => s.key === 'search-formula')?.requests.map((r) => r.path) ?? [];
         fullExport = await exportBench(api, exportPath, rowsQuery, bench.url, { what: 'species searches by formula', paths: searches });

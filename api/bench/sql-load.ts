@@ -1,3 +1,4 @@
+import { inlineParameters } from '../src/shared/sql-literals';
 import { Client } from 'pg';
 import { loadStats, type LoadStats } from './latency-stats';
 
@@ -67,18 +68,7 @@ export async function sqlLoad(url: string, captured: CapturedRequest[], connecti
   };
 }
 
-/** The statement with its parameters written in as literals (for COPY, which takes no parameters). */
-export function inlineParameters(statement: CapturedStatement, escapeLiteral: (text: string) => string): string {
-  return statement.text.replace(/\$(\d+)\b/g, (_match, n: string) => literal(statement.values[Number(n) - 1], escapeLiteral));
-}
-
-function literal(value: unknown, escapeLiteral: (text: string) => string): string {
-  if (value === null || value === undefined) return 'NULL';
-  if (typeof value === 'number' || typeof value === 'bigint') return String(value);
-  if (typeof value === 'boolean') return value ? 'true' : 'false';
-  if (Array.isArray(value)) {
-    return escapeLiteral(`{${value.map((v) => (v === null ? 'NULL' : `"${String(v).replace(/\\/g, '\\\\').replace(/"/g, '\\"')}"`)).join(',')}}`);
-  }
-  if (typeof value === 'object') return escapeLiteral(JSON.stringify(value));
-  return escapeLiteral(String(value));
+/** The captured statement with its parameters written in as literals (for COPY, which takes no parameters). */
+export function inlineStatement(statement: CapturedStatement, escapeLiteral: (text: string) => string): string {
+  return inlineParameters(statement.text, statement.values, escapeLiteral);
 }

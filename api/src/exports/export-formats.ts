@@ -5,7 +5,7 @@ import { stringify, type Options as StringifyOptions } from 'csv-stringify/sync'
 import { XMLBuilder } from 'fast-xml-parser';
 import { SessionThread } from '../shared/session-thread';
 import type { SourceRef } from '../species/species.service';
-import { CSV_ENCODER_ROLE, CSV_OPTIONS, type CsvRun, type FromEncoder } from './csv-encode-thread';
+import { CSV_ENCODER_ROLE, CSV_OPTIONS, type CopyLines, type FromEncoder } from './csv-encode-thread';
 import { EXPORT_COLUMNS, type ExportRow, type Nasa7Row } from './export.service';
 import { nasa7Lines, nasa7Record } from './nasa7-format';
 
@@ -56,21 +56,18 @@ function textTransform<T>(map: (row: T) => string | null, prefix: string, suffix
   });
 }
 
-/**
- * Rows per run sent to the encoder thread: one message and one csv-stringify call each (calls of
- * 1 000 rows were slower than of 100: their strings outlive V8's young generation).
- */
-const CSV_ROWS_PER_RUN = 100;
-/** Runs on their way to the encoder thread and back, at most: reading goes on meanwhile, memory stays bounded. */
-const CSV_RUNS_IN_FLIGHT = 8;
+/** Encoder threads an export's pieces are spread over: csv-stringify is the slowest step of a CSV export. */
+const CSV_ENCODERS = 2;
+/** Pieces of COPY text out at the encoder threads, at most: COPY goes on meanwhile, memory stays bounded. */
+const CSV_PIECES_IN_FLIGHT = 8;
 
 /**
  * CSV: `#` comment lines (release, filters, sources), then a header row and one row per value or
- * fit. Takes rows as arrays in EXPORT_COLUMNS order (ExportService.csvRows: every field text or
- * null) and has csv-stringify write them on the encoder thread (csv-encode-thread.ts), a run of
- * rows at a time, in order.
+ * fit. Takes the rows as PostgreSQL's COPY text (ExportService.csvCopy, columns in EXPORT_COLUMNS
+ * order, of the types given) and has csv-stringify write them on the encoder threads
+ * (csv-encode-thread.ts), piece by piece, put back in order here.
  */
-export function csvStages(header: ExportHeader): Transform[] {
+export function csvStages(header: ExportHeader, columnTypes: number[]): Transform[] {
   const comments = [
     'Kelvindex export (CSV). Values in SI units: J/mol, J/(mol·K), K, Pa. fit_ranges holds a fit\'s ranges as JSON.',
     releaseLine(header),
@@ -79,57 +76,71 @@ export function csvStages(header: ExportHeader): Transform[] {
     ...header.sources.map((s) => `  [${s.key}] ${s.citation}`),
   ].map((line) => `# ${line.replace(/[\r\n]+/g, ' ')}\n`).join('');
   const session = randomUUID();
-  const encoder = SessionThread.of<CsvRun, FromEncoder>(path.join(__dirname, 'csv-encode-thread.js'), CSV_ENCODER_ROLE);
-  /** each row of the run being gathered, its fields joined by NUL */
-  let run: string[] = [];
-  let inFlight = 0;
-  /** the callback held back while CSV_RUNS_IN_FLIGHT runs are out, or until the last run is back */
+  const file = path.join(__dirname, 'csv-encode-thread.js');
+  const encoders = Array.from({ length: CSV_ENCODERS }, (_, i) => SessionThread.of<CopyLines, FromEncoder>(file, CSV_ENCODER_ROLE, i));
+  /** the start of a line whose end has not come yet */
+  let partial: Buffer = Buffer.alloc(0);
+  let sent = 0;
+  /** pieces encoded, by place, until the ones before them are out */
+  const encoded = new Map<number, string>();
+  let out = 0;
+  /** the callback held back while CSV_PIECES_IN_FLIGHT pieces are out, or until the last is back */
   let held: ((error?: Error | null) => void) | null = null;
   let ending = false;
 
-  const send = () => {
-    encoder.send(session, { fields: run.join('\u0000'), rows: run.length });
-    inFlight++;
-    run = [];
+  /** Sends `partial` and `chunk` up to `end` (the end of a line) to the next encoder. */
+  const send = (chunk: Buffer, end: number) => {
+    // Cut at a newline byte, so no UTF-8 character is cut in two.
+    const text = partial.length > 0 ? Buffer.concat([partial, chunk.subarray(0, end)]).toString('utf8') : chunk.toString('utf8', 0, end);
+    encoders[sent % CSV_ENCODERS].send(session, { seq: sent, text, types: columnTypes });
+    sent++;
   };
-  /** Lets the rows go on once fewer runs are out (or, at the end, once every run is back). */
+  /** Lets COPY go on once fewer pieces are out (or, at the end, once every piece is out). */
   const release = () => {
     const callback = held;
-    if (!callback || (ending ? inFlight > 0 : inFlight >= CSV_RUNS_IN_FLIGHT)) return;
+    if (!callback || (ending ? out < sent : sent - out >= CSV_PIECES_IN_FLIGHT)) return;
     held = null;
-    if (ending) encoder.close(session);
+    if (ending) for (const encoder of encoders) encoder.close(session);
     callback();
   };
 
   const stage = new Transform({
-    writableObjectMode: true,
     construct(callback) {
       const fail = (error: Error) => stage.destroy(error);
-      encoder.open(session, (answer) => {
-        inFlight--;
-        if ('error' in answer) return fail(new Error(`the CSV could not be written: ${answer.error}`));
-        stage.push(Buffer.from(answer.bytes.buffer, answer.bytes.byteOffset, answer.bytes.byteLength));
-        release();
-      }, fail);
+      for (const encoder of encoders) {
+        encoder.open(session, (answer) => {
+          if ('error' in answer) return fail(new Error(`the CSV could not be written: ${answer.error}`));
+          encoded.set(answer.seq, answer.csv);
+          for (let next = encoded.get(out); next !== undefined; next = encoded.get(out)) {
+            encoded.delete(out++);
+            stage.push(next);
+          }
+          release();
+        }, fail);
+      }
       this.push(comments + stringify([], { ...CSV_OPTIONS, header: true }));
       callback();
     },
-    transform(row: (string | null)[], _encoding, callback) {
-      // join() writes null as empty text, as csv-stringify writes a null field.
-      run.push(row.join('\u0000'));
-      if (run.length < CSV_ROWS_PER_RUN) return callback();
-      send();
+    transform(chunk: Buffer, _encoding, callback) {
+      const end = chunk.lastIndexOf(0x0a) + 1;
+      if (end === 0) {
+        partial = Buffer.concat([partial, chunk]);
+        return callback();
+      }
+      send(chunk, end);
+      // A copy: the chunk's memory may be the connection's to reuse.
+      partial = Buffer.from(chunk.subarray(end));
       held = callback;
       release();
     },
     flush(callback) {
-      if (run.length > 0) send();
+      if (partial.length > 0) return callback(new Error('the rows ended in the middle of a line'));
       ending = true;
       held = callback;
       release();
     },
     destroy(error, callback) {
-      encoder.close(session);
+      for (const encoder of encoders) encoder.close(session);
       callback(error);
     },
   });
@@ -323,10 +334,9 @@ export function nasa7Stages(header: ExportHeader): Transform[] {
   ];
 }
 
-export function stagesFor(format: ExportFormat, header: ExportHeader): Transform[] {
+/** The stages of the formats written from rows as objects (CSV is written from COPY text: csvStages). */
+export function stagesFor(format: Exclude<ExportFormat, 'csv'>, header: ExportHeader): Transform[] {
   switch (format) {
-    case 'csv':
-      return csvStages(header);
     case 'json':
       return jsonStages(header);
     case 'xml':

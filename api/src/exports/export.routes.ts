@@ -6,7 +6,7 @@ import { releaseResolver } from '../releases/release-resolution';
 import { setReleaseCaching } from '../shared/http-cache';
 import { queryEnum } from '../shared/query-params';
 import { speciesFilterFromQuery } from '../species/species-filter';
-import { CONTENT_TYPES, EXPORT_FORMATS, FILE_EXTENSIONS, stagesFor } from './export-formats';
+import { CONTENT_TYPES, csvStages, EXPORT_FORMATS, FILE_EXTENSIONS, stagesFor, type ExportHeader } from './export-formats';
 import { ExportService } from './export.service';
 
 /**
@@ -41,7 +41,10 @@ export function exportRoutes(ctx: AppContext) {
       }
     }
     const kind = format === 'nasa7' ? 'nasa7' : 'all';
-    const cursor = await (kind === 'nasa7' ? exports.nasa7(release, options) : format === 'csv' ? exports.csvRows(release, options) : exports.rows(release, options));
+    // CSV is written from COPY text, the other formats from rows as objects.
+    const { cursor, stagesOf } = format === 'csv'
+      ? await exports.csvCopy(release, options).then((copy) => ({ cursor: copy, stagesOf: (h: ExportHeader) => csvStages(h, copy.columnTypes) }))
+      : { cursor: await (kind === 'nasa7' ? exports.nasa7(release, options) : exports.rows(release, options)), stagesOf: (h: ExportHeader) => stagesFor(format, h) };
     try {
       // Ask for the first rows now: the database sorts the export while the header's sources are
       // looked up. A failure meanwhile is thrown below (or by the pipeline, once it runs).
@@ -53,7 +56,7 @@ export function exportRoutes(ctx: AppContext) {
       res.set('X-Kelvindex-Release', release.label);
       // No generation time: an export of a published release is the same bytes forever (ETags, backups).
       const header = { release: { label: release.label, status: release.status, publishedAt: release.publishedAt }, query, sources };
-      await pipeline([cursor.stream, ...stagesFor(format, header), res]);
+      await pipeline([cursor.stream, ...stagesOf(header), res]);
     } catch (error) {
       // The client went away (before or during the answer): there is no one to tell.
       if ((error as NodeJS.ErrnoException).code === 'ERR_STREAM_PREMATURE_CLOSE') return;

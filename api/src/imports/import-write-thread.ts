@@ -165,9 +165,10 @@ class WriterSession {
     await this.client.query(statement).finally(() => this.close());
   }
 
-  private async close(): Promise<void> {
+  private close(): void {
     this.ended();
-    await this.client.end().catch(() => undefined);
+    // Not awaited: pg's end() of a connection that failed as it opened can wait for an 'end' event that has already gone by.
+    this.client.end().catch(() => undefined);
   }
 }
 

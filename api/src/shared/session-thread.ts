@@ -12,17 +12,21 @@ export class SessionThread<ToThread extends object, FromThread extends { session
   private readonly worker: Worker;
   private readonly sessions = new Map<string, { hear: (message: FromThread) => void; stop: (error: Error) => void }>();
 
-  /** The thread running `file` (a compiled module that serves when `isSessionThread(role)`), started if it is not running. */
-  static of<T extends object, F extends { session: string }>(file: string, role: string): SessionThread<T, F> {
-    let thread = SessionThread.running.get(file);
+  /**
+   * The thread running `file` (a compiled module that serves when `isSessionThread(role)`),
+   * started if it is not running; `instance` tells apart several threads of the same module.
+   */
+  static of<T extends object, F extends { session: string }>(file: string, role: string, instance = 0): SessionThread<T, F> {
+    const key = `${file}#${instance}`;
+    let thread = SessionThread.running.get(key);
     if (!thread) {
-      thread = new SessionThread(file, role);
-      SessionThread.running.set(file, thread);
+      thread = new SessionThread(key, file, role);
+      SessionThread.running.set(key, thread);
     }
     return thread as unknown as SessionThread<T, F>;
   }
 
-  private constructor(private readonly file: string, role: string) {
+  private constructor(private readonly key: string, file: string, role: string) {
     this.worker = new Worker(file, { workerData: { kxSessionThread: role } });
     this.worker.unref();
     this.worker.on('message', (message: FromThread) => this.sessions.get(message.session)?.hear(message));
@@ -44,7 +48,7 @@ export class SessionThread<ToThread extends object, FromThread extends { session
   }
 
   private gone(error: Error): void {
-    if ((SessionThread.running.get(this.file) as unknown) === this) SessionThread.running.delete(this.file);
+    if ((SessionThread.running.get(this.key) as unknown) === this) SessionThread.running.delete(this.key);
     const sessions = [...this.sessions.values()];
     this.sessions.clear();
     for (const session of sessions) session.stop(error);
