@@ -20,8 +20,10 @@ export async function startServer(config: AppConfig): Promise<RunningServer> {
   await mail.start();
   const app = createApp({ config, dataSource, store, mail });
   const server = await listen(app, config.port, config.host);
+  // PORT=0: the port the kernel chose.
+  const address = server.address();
   return {
-    url: `http://${config.host}:${config.port}`,
+    url: `http://${config.host}:${typeof address === 'object' && address ? address.port : config.port}`,
     dataSource,
     async close() {
       await new Promise<void>((resolve) => server.close(() => resolve()));

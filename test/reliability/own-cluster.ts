@@ -24,9 +24,13 @@ export async function ownCluster(name: string): Promise<{ cluster: PostgresClust
   };
 }
 
-/** App settings for a server of the spec's own on a free port, against `databaseUrl`. */
+/**
+ * App settings for a server of the spec's own, against `databaseUrl`, on the port the kernel
+ * chooses as it starts listening (a port chosen earlier could be taken meanwhile, by a client
+ * connection's ephemeral port for one).
+ */
 export async function ownConfig(databaseUrl: string, extra: Partial<AppConfig> = {}): Promise<AppConfig> {
-  const config = loadConfig({ ...process.env, PORT: String(await anyFreePort()) });
+  const config = loadConfig({ ...process.env, PORT: '0' });
   return { ...config, databaseUrl, ...extra };
 }
 

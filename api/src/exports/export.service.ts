@@ -1,7 +1,6 @@
 import { createHash } from 'node:crypto';
 import type { Readable } from 'node:stream';
 import type { PoolClient } from 'pg';
-import type QueryStream from 'pg-query-stream';
 import { to as copyTo } from 'pg-copy-streams';
 import type { DataSource } from 'typeorm';
 import type { ResolvedRelease } from '../releases/release-resolution';
@@ -220,11 +219,11 @@ export class ExportService {
     );
   }
 
-  private async cursor(sql: string, params: unknown[], config: Pick<QueryStream.Config, 'rowMode' | 'types'> = {}): Promise<ExportCursor> {
+  private async cursor(sql: string, params: unknown[]): Promise<ExportCursor> {
     // A replica when one is configured: an export is a long read.
     const runner = this.dataSource.createQueryRunner('slave');
     const client = (await runner.connect()) as PoolClient;
-    const stream = client.query(new PortalStream(sql, params, { ...config, bufferedRows: BUFFERED_ROWS }));
+    const stream = client.query(new PortalStream(sql, params, { bufferedRows: BUFFERED_ROWS }));
     let released = false;
     return {
       stream,
