@@ -71,6 +71,7 @@ class WriterSession {
   /** connected, in the transaction, and the way of checking references known */
   private readonly ready: Promise<void>;
   private checks: TableChecks | null = null;
+  private connected = false;
   private proposalId = '';
   /** the parts' COPY statements and checks, one after another */
   private queue: Promise<void> = Promise.resolve();
@@ -87,6 +88,7 @@ class WriterSession {
     // Connected and in a transaction while the request's thread still reads the file.
     this.ready = (async () => {
       await this.client.connect();
+      this.connected = true;
       await this.client.query('BEGIN');
       this.checks = await setBasedChecksPossible(this.client, 'proposal_items');
       if (this.checks) await rowTriggers(this.client, 'off');
@@ -162,6 +164,12 @@ class WriterSession {
   }
 
   private async end(statement: 'COMMIT' | 'ROLLBACK'): Promise<void> {
+    // pg queues a statement on a connection that failed as it opened, and never runs it: nothing to end there.
+    if (!this.connected) {
+      this.close();
+      if (statement === 'COMMIT') throw new Error('the import writer is not connected');
+      return;
+    }
     await this.client.query(statement).finally(() => this.close());
   }
 
