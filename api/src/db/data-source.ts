@@ -1,6 +1,7 @@
 import 'reflect-metadata';
 import path from 'node:path';
 import { DataSource, DataSourceOptions } from 'typeorm';
+import { GuardedClient } from './guarded-client';
 import { fallBackToPrimaryWhenReplicaIsDown } from './replica-fallback';
 
 /** dist/server/api/src/db → dist/server */
@@ -14,7 +15,8 @@ export function dataSourceOptions(databaseUrl: string, replicaUrls: string[] = [
     migrationsTableName: 'schema_migrations',
     synchronize: false,
     logging: ['error' as const],
-    extra: { max: 20, connectionTimeoutMillis: 5000 },
+    // Every pooled client keeps an 'error' listener (guarded-client.ts).
+    extra: { max: 20, connectionTimeoutMillis: 5000, Client: GuardedClient },
   };
   if (replicaUrls.length === 0) return { ...common, url: databaseUrl };
   return {
