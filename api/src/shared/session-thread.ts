@@ -58,8 +58,8 @@ export class SessionThread<ToThread extends object, FromThread extends { session
     this.restartIdleTime();
   }
 
-  send(session: string, message: ToThread, transfer: ArrayBuffer[] = []): void {
-    this.worker.postMessage({ ...message, session }, transfer);
+  send(session: string, message: ToThread): void {
+    this.worker.postMessage({ ...message, session });
   }
 
   private restartIdleTime(): void {
